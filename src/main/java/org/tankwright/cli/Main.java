@@ -1,0 +1,31 @@
+package org.tankwright.cli;
+
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** Entry point of {@code tankwright}: the command line, and the workbench when no command is given. */
+@Command(name = "tankwright",
+        mixinStandardHelpOptions = true,
+        versionProvider = VersionInfo.class,
+        description = "Design and tune resonant inductive circuits: wireless-power links and induction heaters.",
+        subcommands = {
+                CommandLine.HelpCommand.class,
+        })
+public final class Main implements Runnable {
+
+    public static void main(String[] args) {
+        System.exit(run(args));
+    }
+
+    /** Runs the command line and returns the exit status instead of exiting (for tests). */
+    public static int run(String... args) {
+        CommandLine cl = ExitCodes.configure(new CommandLine(new Main()));
+        return cl.execute(args);
+    }
+
+    @Override
+    public void run() {
+        // No command: the workbench on the demo design (same as `tankwright open`).
+        new CommandLine(new Main()).usage(System.out);
+    }
+}
