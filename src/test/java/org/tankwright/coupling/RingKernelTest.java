@@ -47,7 +47,7 @@ class RingKernelTest {
         double dz = 0.04;
         double d = 0.07;
         double[] b = new double[3];
-        int nr = 400;
+        int nr = 64;
         int nt = 400;
         double flux = 0;
         org.hipparchus.analysis.integration.gauss.GaussIntegrator rule =
