@@ -10,6 +10,7 @@ import picocli.CommandLine.Command;
         description = "Design and tune resonant inductive circuits: wireless-power links and induction heaters.",
         subcommands = {
                 CommandLine.HelpCommand.class,
+                TuneCommand.class,
         })
 public final class Main implements Runnable {
 
