@@ -20,8 +20,13 @@ public final class BatterySolver {
      */
     public static double solve(PhasorSolver s, int load, double f, double vFundamental) {
         s.setResistance(load, Double.POSITIVE_INFINITY);
-        s.solve(f);
-        if (s.voltageRms(load) <= vFundamental) {
+        boolean unbounded = false;
+        try {
+            s.solve(f);
+        } catch (IllegalStateException singular) {
+            unbounded = true; // a lossless resonance with the load open: the open-circuit voltage has no bound
+        }
+        if (!unbounded && s.voltageRms(load) <= vFundamental) {
             return Double.POSITIVE_INFINITY;
         }
         double hi = 1;

@@ -25,9 +25,17 @@ public final class Tuner {
     private Tuner() {
     }
 
-    /** Tunes and solves; the whole result, ready for every face. */
+    /** Tunes and solves; the whole result, ready for every face (with the bifurcation thresholds). */
     public static TuningResult tune(LinkDesign d) {
-        return d.topology().isLink() ? tuneLink(d) : tuneTank(d);
+        return tune(d, true);
+    }
+
+    /**
+     * Tunes and solves; {@code thresholds} = false skips the search for the load and coupling at
+     * which the design bifurcates (the costly part, a few hundred thousand solves) for fast recomputes.
+     */
+    public static TuningResult tune(LinkDesign d, boolean thresholds) {
+        return d.topology().isLink() ? tuneLink(d, thresholds) : tuneTank(d);
     }
 
     /** The network of a design with the given capacitors (the load as its AC resistance, 1 Ω for a battery until solved). */
@@ -46,10 +54,10 @@ public final class Tuner {
         PhasorSolver s = new PhasorSolver(network(d, c, 0, 0));
         OperatingPoint op = OperatingPoint.of(s, d.topology(), d.source(), d.load(), d.frequency(), d.parts());
         double[] zpf = Bifurcation.zeroPhaseFrequencies(s, d.frequency());
-        return new TuningResult(d, c, 0, cText, 0, null, op, zpf, null, null, new double[0], new double[0], List.of());
+        return new TuningResult(d, c, 0, cText, 0, null, op, zpf, null, null, null, null, List.of());
     }
 
-    private static TuningResult tuneLink(LinkDesign d) {
+    private static TuningResult tuneLink(LinkDesign d, boolean thresholds) {
         double f = d.frequency();
         double w = 2 * Math.PI * f;
         LinkValues v = d.coils();
@@ -96,8 +104,8 @@ public final class Tuner {
             closed = EfficiencyOptimum.seriesSeriesClosedForm(v.k(), w * v.l1() / v.r1(), w * v.l2() / v.r2(), v.r2());
         }
         double x2 = w * v.l2();
-        double[] loads = Bifurcation.loadThresholds(s, f, x2 * 1e-3, x2 * 1e3);
-        double[] couplings = Bifurcation.couplingThresholds(s, f, 0.01, 0.95);
+        double[] loads = thresholds ? Bifurcation.loadThresholds(s, f, x2 * 1e-3, x2 * 1e3) : null;
+        double[] couplings = thresholds ? Bifurcation.couplingThresholds(s, f, 0.01, 0.95) : null;
         if (zpf.length > 1) {
             notes.add("bifurcated: " + zpf.length + " zero-phase frequencies between f/2 and 2f");
         }

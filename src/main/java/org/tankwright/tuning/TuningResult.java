@@ -16,7 +16,8 @@ import java.util.Map;
  * @param optimum            numerical ηmax over the load (null for a tank)
  * @param closedForm         SS closed-form ηmax (null otherwise, or when a coil resistance is 0)
  * @param bifurcationLoads   AC load resistances where the number of zero-phase frequencies changes
- * @param bifurcationCouplings coupling factors (L1, L2 fixed) where it changes
+ *                           (null when not searched)
+ * @param bifurcationCouplings coupling factors (L1, L2 fixed) where it changes (null when not searched)
  */
 public record TuningResult(LinkDesign design, double c1, double c2, double c1Textbook, double c2Textbook,
                            PhaseSolve phase, OperatingPoint operatingPoint, double[] zeroPhaseFrequencies,
@@ -67,8 +68,10 @@ public record TuningResult(LinkDesign design, double c1, double c2, double c1Tex
                 m.put("load_optimal_closed_form_ohm", closedForm.load());
             }
             m.put("bifurcated", zeroPhaseFrequencies.length > 1);
-            m.put("bifurcation_load_ohm", bifurcationLoads.clone());
-            m.put("bifurcation_coupling", bifurcationCouplings.clone());
+            if (bifurcationLoads != null) {
+                m.put("bifurcation_load_ohm", bifurcationLoads.clone());
+                m.put("bifurcation_coupling", bifurcationCouplings.clone());
+            }
             m.put("coupling_k", design.coils().k());
         } else if (design.coils().r1() > 0) {
             m.put("resonant_frequency_Hz", tankResonantFrequency());
