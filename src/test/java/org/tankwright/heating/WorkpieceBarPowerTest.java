@@ -63,7 +63,7 @@ class WorkpieceBarPowerTest {
      */
     private static Complex numericalFluxFactor(double a, double c, double delta, double muR) {
         Complex k2 = new Complex(0, 2 / (delta * delta));
-        int n = 40000;
+        int n = 6000;
         double r0 = c > 0 ? c : a * 1e-6;
         Complex h = Complex.ONE;
         Complex dh = c > 0 ? k2.multiply(c / (2 * muR)) : k2.multiply(r0 / 2);
