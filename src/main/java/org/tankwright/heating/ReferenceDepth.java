@@ -5,7 +5,7 @@ import org.tankwright.units.Constants;
 /**
  * Reference (skin) depth δ = √(2ρ/(ω·µ0·µr)): the depth at which an induced current density in a
  * thick conductor falls to 1/e of its surface value; the same formula as δ = 503·√(ρ/(µr·f)) m of
- * the induction-heating handbooks (503 ≈ 1/(π·√(4π·10⁻⁷))).
+ * the induction-heating handbooks (503.3 = 1/√(π·µ0)).
  */
 public final class ReferenceDepth {
     private ReferenceDepth() {

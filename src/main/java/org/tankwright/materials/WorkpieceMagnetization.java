@@ -8,7 +8,7 @@ import org.tankwright.units.Constants;
  * temperature.
  *
  * <p>Model (ours, stated): the polarization J = B − µ0·H is read from the tabulated curve by
- * linear interpolation in ln H; beyond the last point J stays at its last value (saturation), so
+ * straight-line interpolation of ln J against ln H (exact for J ∝ H at low field); beyond the last point J stays at its last value (saturation), so
  * µr = 1 + J_s/(µ0·H) at heating fields; below the first point µr keeps its first value. With
  * temperature J is scaled by the reduced spontaneous magnetization m(T)/m(20 °C), with
  * m(τ) = [1 − s·τ^{3/2} − (1 − s)·τ^{5/2}]^{1/3}, τ = T/T_C in kelvin (Kuz'min, Phys. Rev.
@@ -92,7 +92,7 @@ public record WorkpieceMagnetization(WorkpieceCurve bh, double curieC, double sh
             double t = Math.log(hh / h[lo]) / Math.log(h[hi] / h[lo]);
             double jLo = b[lo] - Constants.MU0 * h[lo];
             double jHi = b[hi] - Constants.MU0 * h[hi];
-            polarization = jLo + t * (jHi - jLo);
+            polarization = jLo * Math.pow(jHi / jLo, t);
         }
         return 1.0 + m * polarization / (Constants.MU0 * hh);
     }
