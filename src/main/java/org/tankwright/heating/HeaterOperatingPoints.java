@@ -1,9 +1,11 @@
 package org.tankwright.heating;
 
+import org.tankwright.materials.WorkpieceCurve;
 import org.tankwright.materials.WorkpieceMaterial;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.TreeSet;
 
 /**
  * Solves a heater's cold and hot operating points: at each workpiece temperature the tank
@@ -58,6 +60,36 @@ public final class HeaterOperatingPoints {
         }
         load = WorkpieceLoad.inCoil(coil, bar, medium, f, coilCurrent);
         return new OperatingPoint(label, temperatureC, material.magneticAt(temperatureC), tankCapacitance, load);
+    }
+
+    /**
+     * Power into the workpiece against its temperature at the set coil current, each temperature at its
+     * own resonance with the tank: a table (°C → W) to hand to {@link HeatingTime}. Samples are evenly
+     * spaced, plus points just either side of a Curie point in the range.
+     */
+    public static WorkpieceCurve powerCurve(WorkCoil coil, BarGeometry bar, WorkpieceMaterial material, double fromC,
+                                            double toC, double tankCapacitance, double coilCurrent, int samples) {
+        if (!(toC > fromC) || samples < 2) {
+            throw new IllegalArgumentException("power curve needs a temperature range (from " + fromC + " °C to " + toC
+                    + " °C) and at least 2 samples (got " + samples + ")");
+        }
+        TreeSet<Double> temps = new TreeSet<>();
+        for (int i = 0; i < samples; i++) {
+            temps.add(fromC + (toC - fromC) * i / (samples - 1));
+        }
+        double curie = material.curiePointC();
+        if (curie > fromC && curie < toC) {
+            temps.add(Math.max(fromC, curie - 0.5));
+            temps.add(Math.min(toC, curie + 0.5));
+        }
+        double[] t = new double[temps.size()];
+        double[] p = new double[temps.size()];
+        int k = 0;
+        for (double temp : temps) {
+            t[k] = temp;
+            p[k++] = point("sample", coil, bar, material, temp, tankCapacitance, coilCurrent).load().workPower();
+        }
+        return new WorkpieceCurve(t, p, "heater operating points at the set coil current");
     }
 
     private static double resonance(double inductance, double capacitance) {
