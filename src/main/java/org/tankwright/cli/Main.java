@@ -13,6 +13,7 @@ import picocli.CommandLine.Command;
                 OpenCommand.class,
                 ValidateCommand.class,
                 TuneCommand.class,
+                WorkpieceCommand.class,
         })
 public final class Main implements Runnable {
 
