@@ -16,7 +16,7 @@ public record Catalogue(String name, String currency, String note, List<Capacito
     /** Current format version. */
     public static final int VERSION = 1;
     /** Classpath location of the bundled demo catalogue. */
-    public static final String DEMO_RESOURCE = "/org/tankwright/capacitors/demo-catalogue.json";
+    public static final String DEMO_RESOURCE = "/presets/parts/demo-catalogue.json";
 
     public Catalogue {
         parts = List.copyOf(parts);
