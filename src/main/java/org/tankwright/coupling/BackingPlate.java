@@ -94,8 +94,11 @@ public record BackingPlate(Material material, double relativePermeability, doubl
         return slabCoefficient(1 / meanRadius);
     }
 
-    /** Notes on how the coefficient was obtained and how far to trust it, for a coil of mean radius ℓ. */
-    List<String> notes(String coilName, double meanRadius) {
+    /**
+     * Notes on how the coefficient was obtained and how far to trust it, for a coil of mean radius ℓ;
+     * {@code exactSpectrum} when the solver applied Γ(q) at every wavenumber (round coils).
+     */
+    List<String> notes(String coilName, double meanRadius, boolean exactSpectrum) {
         List<String> notes = new ArrayList<>();
         double eta = imageCoefficient(meanRadius);
         if (!Double.isNaN(measuredCoefficient)) {
@@ -104,6 +107,11 @@ public record BackingPlate(Material material, double relativePermeability, doubl
         }
         if (material == Material.METAL) {
             notes.add(coilName + " plate: metal taken as a perfect conductor (image −1); valid when thicker than about 3 skin depths");
+            return notes;
+        }
+        if (exactSpectrum) {
+            notes.add(String.format("%s plate: ferrite µr %.0f, %.4g m thick: slab reflection Γ(q) applied at every "
+                    + "spatial wavenumber (half-space value %.4f)", coilName, relativePermeability, thickness, halfSpaceCoefficient()));
             return notes;
         }
         double lo = slabCoefficient(0.5 / meanRadius);

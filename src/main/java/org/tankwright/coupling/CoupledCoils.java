@@ -37,9 +37,10 @@ public final class CoupledCoils {
     }
 
     private static final String MODEL = "filament sum";
+    private static final String SPECTRAL = "spectral filament sum (Hankel transform)";
     private static final String SOURCE = "Maxwell (1873) §701 coaxial rings; Grover (1946) ch. 13 and Babic et al., "
             + "IEEE Trans. Magn. 46(9) 2010 for offset rings; Neumann integral with Grover's straight-filament "
-            + "formulas (1946) for segments";
+            + "formulas (1946) for segments; Smythe, Static and Dynamic Electricity §7.13-7.14, for the spectral form";
 
     private final Coil coilA;
     private final Coil coilB;
@@ -58,8 +59,14 @@ public final class CoupledCoils {
     private final double etaA;
     private final double etaB;
     private final double radiusSum;
+    private final SpectralLink spectral;
 
     public CoupledCoils(Coil coilA, Coil coilB) {
+        this(coilA, coilB, true);
+    }
+
+    /** With {@code spectralAllowed} false, round coils too go through the filament-pair sums (for cross-checks). */
+    CoupledCoils(Coil coilA, Coil coilB, boolean spectralAllowed) {
         this.coilA = coilA;
         this.coilB = coilB;
         FilamentSet rawA = FilamentSet.of(coilA.filaments());
@@ -74,7 +81,8 @@ public final class CoupledCoils {
         etaA = coilA.plate() == null ? 0 : coilA.plate().imageCoefficient(a.meanRadius());
         etaB = coilB.plate() == null ? 0 : coilB.plate().imageCoefficient(b.meanRadius());
         ab = new PairSum(a, b);
-        boolean images = etaA != 0 || etaB != 0;
+        spectral = spectralAllowed && a.axisymmetric() && b.axisymmetric() ? new SpectralLink(a, b, coilA.plate(), coilB.plate()) : null;
+        boolean images = spectral == null && (etaA != 0 || etaB != 0);
         abMirror = images ? new PairSum(a, b.transformed(true, 0, 0, 0, 1)) : null;
         aa = images ? new PairSum(a, a) : null;
         aaMirror = images ? new PairSum(a, a.transformed(true, 0, 0, 0, 1)) : null;
@@ -129,39 +137,27 @@ public final class CoupledCoils {
             throw new IllegalArgumentException(String.format(
                     "the coils overlap: gap %.6g m (distance %.6g m) must be ≥ 0 and offsets finite", gap, distance));
         }
-        double m0 = ab.mutual(dx, dy, distance, tolerance);
-        double mutual = m0;
-        double la = coilA.selfInductance();
-        double lb = coilB.selfInductance();
+        double zA = aBottom - (coilA.plate() == null ? 0 : coilA.plate().spacing());
+        double zB = distance + bTop + (coilB.plate() == null ? 0 : coilB.plate().spacing());
         List<String> notes = new ArrayList<>();
+        boolean plates = etaA != 0 || etaB != 0;
+        // values[0..2]: M, change of L_a, change of L_b
+        double[] values;
         boolean valid = true;
-        if (etaA != 0 || etaB != 0) {
-            double zA = aBottom - (coilA.plate() == null ? 0 : coilA.plate().spacing());
-            double zB = distance + bTop + (coilB.plate() == null ? 0 : coilB.plate().spacing());
-            ImageSeries.Sum mb = ImageSeries.sum(zA, etaA, zB, etaB, distance, m0, radiusSum,
-                    (mirror, shift, w) -> w * (mirror ? abMirror : ab).mutual(dx, dy, shift, tolerance));
-            ImageSeries.Sum sa = ImageSeries.sum(zA, etaA, zB, etaB, 0, la, radiusSum,
-                    (mirror, shift, w) -> w * (mirror ? aaMirror : aa).mutual(0, 0, shift, tolerance));
-            ImageSeries.Sum sb = ImageSeries.sum(zA, etaA, zB, etaB, distance, lb, radiusSum,
-                    (mirror, shift, w) -> w * (mirror ? bbMirror : bb).mutual(0, 0, shift - distance, tolerance));
-            mutual += mb.value();
-            la += sa.value();
-            lb += sb.value();
-            if (coilA.plate() != null) {
-                notes.addAll(coilA.plate().notes(coilA.name(), a.meanRadius()));
-                valid &= !coilA.plate().thinTileDoubtful(a.meanRadius());
+        if (spectral != null) {
+            SpectralLink.Values v = spectral.solve(distance, Math.hypot(dx, dy), zA, zB);
+            values = new double[] {v.mutual(), v.deltaA(), v.deltaB()};
+        } else {
+            values = new double[] {ab.mutual(dx, dy, distance, tolerance), 0, 0};
+            if (plates) {
+                valid = imagesByPairSums(distance, dx, dy, zA, zB, tolerance, values, notes);
             }
-            if (coilB.plate() != null) {
-                notes.addAll(coilB.plate().notes(coilB.name(), b.meanRadius()));
-                valid &= !coilB.plate().thinTileDoubtful(b.meanRadius());
-            }
-            notes.add("image method: plates taken as infinite planes; valid when each plate extends beyond its coil "
-                    + "by more than the plate-to-plate distance");
-            if (mb.truncated() || sa.truncated() || sb.truncated()) {
-                notes.add("image series between the two plates cut after " + ImageSeries.MAX_ORDER
-                        + " orders with a tail estimate: plates very close for their size");
-                valid = false;
-            }
+        }
+        double mutual = values[0];
+        double la = coilA.selfInductance() + values[1];
+        double lb = coilB.selfInductance() + values[2];
+        if (plates) {
+            valid &= plateNotes(notes);
             if (!(la > 0 && lb > 0)) {
                 throw new IllegalArgumentException("the plates' images leave a self-inductance ≤ 0 (a: " + la + " H, b: "
                         + lb + " H): metal shields closer than the model can describe");
@@ -172,8 +168,45 @@ public final class CoupledCoils {
             notes.add(String.format("|k| = %.4f ≥ 1: the coil model's self-inductances are inconsistent with the filament sum", Math.abs(k)));
             valid = false;
         }
-        String model = etaA != 0 || etaB != 0 ? MODEL + " with plate images" : MODEL;
+        String model = (spectral != null ? SPECTRAL : MODEL) + (plates ? " with plate images" : "");
         return new CouplingResult(gap, distance, dx, dy, mutual, k, la, lb, new Provenance(model, SOURCE, valid, notes));
+    }
+
+    /** Adds the image series' M and self terms into values; false when the series had to be cut. */
+    private boolean imagesByPairSums(double distance, double dx, double dy, double zA, double zB, double tol,
+                                     double[] values, List<String> notes) {
+        ImageSeries.Sum mb = ImageSeries.sum(zA, etaA, zB, etaB, distance, values[0], radiusSum,
+                (mirror, shift, w) -> w * (mirror ? abMirror : ab).mutual(dx, dy, shift, tol));
+        ImageSeries.Sum sa = ImageSeries.sum(zA, etaA, zB, etaB, 0, coilA.selfInductance(), radiusSum,
+                (mirror, shift, w) -> w * (mirror ? aaMirror : aa).mutual(0, 0, shift, tol));
+        ImageSeries.Sum sb = ImageSeries.sum(zA, etaA, zB, etaB, distance, coilB.selfInductance(), radiusSum,
+                (mirror, shift, w) -> w * (mirror ? bbMirror : bb).mutual(0, 0, shift - distance, tol));
+        values[0] += mb.value();
+        values[1] += sa.value();
+        values[2] += sb.value();
+        if (mb.truncated() || sa.truncated() || sb.truncated()) {
+            notes.add("image series between the two plates cut after " + ImageSeries.MAX_ORDER
+                    + " orders with a tail estimate: plates very close for their size");
+            return false;
+        }
+        return true;
+    }
+
+    /** The plates' notes; false when a thin tile makes the single-wavenumber coefficient doubtful. */
+    private boolean plateNotes(List<String> notes) {
+        boolean valid = true;
+        boolean exact = spectral != null;
+        if (coilA.plate() != null) {
+            notes.addAll(coilA.plate().notes(coilA.name(), a.meanRadius(), exact));
+            valid &= exact || !coilA.plate().thinTileDoubtful(a.meanRadius());
+        }
+        if (coilB.plate() != null) {
+            notes.addAll(coilB.plate().notes(coilB.name(), b.meanRadius(), exact));
+            valid &= exact || !coilB.plate().thinTileDoubtful(b.meanRadius());
+        }
+        notes.add("image method: plates taken as infinite planes; valid when each plate extends beyond its coil "
+                + "by more than the plate-to-plate distance");
+        return valid;
     }
 
     /**

@@ -11,9 +11,8 @@ package org.tankwright.coupling;
  * </pre>
  * A term is evaluated by the caller for (mirror, shift) where the image of a source point at local
  * height z_loc lies at (mirror ? −z_loc : z_loc) + shift. The series is summed order by order until an
- * order adds less than 1e-9 of the total, or, once the images are far (2nL above ten coil radii,
- * where each order falls off like a dipole's n⁻³), the rest is added as the tail
- * Σ_{j&gt;N} c_N (ηAηB)^(j−N) (N/j)³.
+ * order adds less than 1e-9 of the total, or, once the images are far (2nL above ten coil radii),
+ * the rest is added from a three-term multipole fit to the last three orders (see {@link #tail}).
  */
 final class ImageSeries {
     /** Orders beyond which the series is cut (with its tail estimate) and reported as truncated. */
@@ -51,7 +50,7 @@ final class ImageSeries {
         }
         double l = zB - zA;
         double w = 1;
-        double last = 0;
+        double[] last = new double[3]; // the last three orders divided by (ηAηB)^n
         int n = 1;
         for (; n <= MAX_ORDER; n++) {
             w *= w2;
@@ -60,11 +59,13 @@ final class ImageSeries {
                     + t.value(false, z0 + 2 * n * l, w)
                     + t.value(false, z0 - 2 * n * l, w);
             total += order;
-            last = order;
+            last[0] = last[1];
+            last[1] = last[2];
+            last[2] = order / w;
             if (Math.abs(order) <= 1e-9 * Math.abs(direct + total)) {
                 return new Sum(total, n, false);
             }
-            if (2 * n * l >= 10 * radiusSum) {
+            if (n >= 3 && 2 * n * l >= 10 * radiusSum) {
                 return new Sum(total + tail(last, n, w2), n, false);
             }
         }
@@ -72,18 +73,53 @@ final class ImageSeries {
         return new Sum(total + tail(last, n, w2), n, true);
     }
 
-    private static double tail(double last, int n, double w2) {
+    /**
+     * Far orders follow the multipole expansion c_n = (ηAηB)^n (α/n³ + β/n⁴ + γ/n⁵); α, β, γ are fitted
+     * to the last three orders and the rest of the series is summed from the fit.
+     */
+    private static double tail(double[] last, int n, double w2) {
+        double[][] m = new double[3][4];
+        for (int r = 0; r < 3; r++) {
+            double j = n - 2 + r;
+            m[r][0] = 1 / (j * j * j);
+            m[r][1] = m[r][0] / j;
+            m[r][2] = m[r][1] / j;
+            m[r][3] = last[r];
+        }
+        double[] c = solve3(m);
         double sum = 0;
-        double w = 1;
-        for (int j = n + 1; j < n + 100000; j++) {
+        double w = Math.pow(w2, n);
+        for (int j = n + 1; j < n + 1000000; j++) {
             w *= w2;
-            double r = (double) n / j;
-            double term = w * r * r * r;
+            double term = w * (c[0] / ((double) j * j * j) + c[1] / ((double) j * j * j * j) + c[2] / Math.pow(j, 5));
             sum += term;
-            if (term < 1e-12 * sum) {
+            if (Math.abs(term) < 1e-13 * Math.abs(sum) || w == 0) {
                 break;
             }
         }
-        return last * sum;
+        return sum;
+    }
+
+    private static double[] solve3(double[][] m) {
+        for (int col = 0; col < 3; col++) {
+            int piv = col;
+            for (int r = col + 1; r < 3; r++) {
+                if (Math.abs(m[r][col]) > Math.abs(m[piv][col])) {
+                    piv = r;
+                }
+            }
+            double[] t = m[col];
+            m[col] = m[piv];
+            m[piv] = t;
+            for (int r = 0; r < 3; r++) {
+                if (r != col) {
+                    double f = m[r][col] / m[col][col];
+                    for (int c = col; c < 4; c++) {
+                        m[r][c] -= f * m[col][c];
+                    }
+                }
+            }
+        }
+        return new double[] {m[0][3] / m[0][0], m[1][3] / m[1][1], m[2][3] / m[2][2]};
     }
 }
