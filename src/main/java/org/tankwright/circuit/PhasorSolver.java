@@ -4,8 +4,9 @@ import java.util.List;
 
 /**
  * Solves a {@link Network} at one frequency by modified nodal analysis: the unknowns are the
- * node voltages (node 0 is the reference) and every element's current, so coupled coils, ideal
- * sources, shorts and opens all fit one matrix. Complex arithmetic on primitive arrays; the
+ * node voltages (node 0 is the reference) and the currents of the elements that need one (voltage
+ * sources, coupled coils, zero impedances); the other impedances enter as admittances, current
+ * sources on the right-hand side and opens not at all, so every network fits one matrix. Complex arithmetic on primitive arrays; the
  * workspace is allocated once, so repeated solves (sweeps, root finding) allocate nothing.
  *
  * <p>Element values can be changed in place with the setters (a sweep over load, capacitance or
@@ -15,7 +16,11 @@ public final class PhasorSolver {
     private final Network network;
     private final int nodes;
     private final int count;
-    private final int size;
+    private int size;
+    private final boolean[] coupled;
+    private final int[] unknown;
+    private final double[] zr;
+    private final double[] zx;
     private final Element.Kind[] kind;
     private final int[] na;
     private final int[] nb;
@@ -41,7 +46,11 @@ public final class PhasorSolver {
         List<Element> els = network.elements();
         nodes = network.nodeCount();
         count = els.size();
-        size = nodes - 1 + count;
+        int maxSize = nodes - 1 + count;
+        coupled = new boolean[count];
+        unknown = new int[count];
+        zr = new double[count];
+        zx = new double[count];
         kind = new Element.Kind[count];
         na = new int[count];
         nb = new int[count];
@@ -68,11 +77,13 @@ public final class PhasorSolver {
             kFirst[k] = cp.first();
             kSecond[k] = cp.second();
             kM[k] = cp.m();
+            coupled[cp.first()] = true;
+            coupled[cp.second()] = true;
         }
-        are = new double[size * size];
-        aim = new double[size * size];
-        xre = new double[size];
-        xim = new double[size];
+        are = new double[maxSize * maxSize];
+        aim = new double[maxSize * maxSize];
+        xre = new double[maxSize];
+        xim = new double[maxSize];
         vRe = new double[count];
         vIm = new double[count];
         iRe = new double[count];
@@ -159,70 +170,114 @@ public final class PhasorSolver {
         }
         frequency = f;
         final double w = 2 * Math.PI * f;
-        final int n = size;
         final int off = nodes - 1;
-        java.util.Arrays.fill(are, 0.0);
-        java.util.Arrays.fill(aim, 0.0);
-        java.util.Arrays.fill(xre, 0.0);
-        java.util.Arrays.fill(xim, 0.0);
+        // Unknowns: node voltages, then a current for each element that needs one (sources, coupled
+        // coils, zero impedances). Other impedances are stamped as admittances: a smaller system.
+        int n = off;
         for (int j = 0; j < count; j++) {
-            int col = off + j;
-            int row = off + j;
-            int a = na[j];
-            int b = nb[j];
-            // KCL: the element's current leaves node a and enters node b.
-            if (a > 0) {
-                are[(a - 1) * n + col] += 1;
-            }
-            if (b > 0) {
-                are[(b - 1) * n + col] -= 1;
-            }
             Element.Kind k = kind[j];
-            boolean open = k == Element.Kind.OPEN || (k == Element.Kind.IMPEDANCE && Double.isInfinite(r[j]));
-            if (open || k == Element.Kind.CURRENT_SOURCE) {
-                are[row * n + col] = 1;
-                xre[row] = open ? 0 : -value[j];
-                continue;
-            }
-            // V(a) − V(b) − Z·I − Σ jωM·I_k = E
-            if (a > 0) {
-                are[row * n + a - 1] += 1;
-            }
-            if (b > 0) {
-                are[row * n + b - 1] -= 1;
-            }
             double x = w * l[j] - (Double.isInfinite(c[j]) ? 0 : 1 / (w * c[j]));
-            are[row * n + col] -= r[j];
-            aim[row * n + col] -= x;
-            if (k == Element.Kind.VOLTAGE_SOURCE) {
-                xre[row] = value[j];
+            zr[j] = r[j];
+            zx[j] = x;
+            if (k == Element.Kind.OPEN || k == Element.Kind.CURRENT_SOURCE
+                    || (k == Element.Kind.IMPEDANCE && Double.isInfinite(r[j]))) {
+                unknown[j] = -1;
+            } else if (k == Element.Kind.VOLTAGE_SOURCE || coupled[j] || (r[j] == 0 && x == 0)) {
+                unknown[j] = n++;
+            } else {
+                unknown[j] = -2;
+            }
+        }
+        size = n;
+        java.util.Arrays.fill(are, 0, n * n, 0.0);
+        java.util.Arrays.fill(aim, 0, n * n, 0.0);
+        java.util.Arrays.fill(xre, 0, n, 0.0);
+        java.util.Arrays.fill(xim, 0, n, 0.0);
+        for (int j = 0; j < count; j++) {
+            int a = na[j] - 1;
+            int b = nb[j] - 1;
+            int u = unknown[j];
+            if (u == -2) {
+                double d = zr[j] * zr[j] + zx[j] * zx[j];
+                double yr = zr[j] / d;
+                double yi = -zx[j] / d;
+                if (a >= 0) {
+                    are[a * n + a] += yr;
+                    aim[a * n + a] += yi;
+                }
+                if (b >= 0) {
+                    are[b * n + b] += yr;
+                    aim[b * n + b] += yi;
+                }
+                if (a >= 0 && b >= 0) {
+                    are[a * n + b] -= yr;
+                    aim[a * n + b] -= yi;
+                    are[b * n + a] -= yr;
+                    aim[b * n + a] -= yi;
+                }
+            } else if (u == -1) {
+                if (kind[j] == Element.Kind.CURRENT_SOURCE) {
+                    // the element current (a to b) is −J: it delivers J out of terminal a
+                    if (a >= 0) {
+                        xre[a] += value[j];
+                    }
+                    if (b >= 0) {
+                        xre[b] -= value[j];
+                    }
+                }
+            } else {
+                // KCL: the element's current leaves node a and enters node b
+                if (a >= 0) {
+                    are[a * n + u] += 1;
+                    are[u * n + a] += 1;
+                }
+                if (b >= 0) {
+                    are[b * n + u] -= 1;
+                    are[u * n + b] -= 1;
+                }
+                // V(a) − V(b) − Z·I − Σ jωM·I_k = E
+                are[u * n + u] -= zr[j];
+                aim[u * n + u] -= zx[j];
+                if (kind[j] == Element.Kind.VOLTAGE_SOURCE) {
+                    xre[u] = value[j];
+                }
             }
         }
         for (int k = 0; k < kM.length; k++) {
-            int p = kFirst[k];
-            int s = kSecond[k];
+            int p = unknown[kFirst[k]];
+            int q = unknown[kSecond[k]];
             double xm = w * kM[k];
-            aim[(off + p) * n + off + s] -= xm;
-            aim[(off + s) * n + off + p] -= xm;
+            aim[p * n + q] -= xm;
+            aim[q * n + p] -= xm;
         }
         eliminate();
         for (int j = 0; j < count; j++) {
-            int a = na[j];
-            int b = nb[j];
+            int a = na[j] - 1;
+            int b = nb[j] - 1;
             double vr = 0;
             double vi = 0;
-            if (a > 0) {
-                vr += xre[a - 1];
-                vi += xim[a - 1];
+            if (a >= 0) {
+                vr += xre[a];
+                vi += xim[a];
             }
-            if (b > 0) {
-                vr -= xre[b - 1];
-                vi -= xim[b - 1];
+            if (b >= 0) {
+                vr -= xre[b];
+                vi -= xim[b];
             }
             vRe[j] = vr;
             vIm[j] = vi;
-            iRe[j] = xre[off + j];
-            iIm[j] = xim[off + j];
+            int u = unknown[j];
+            if (u >= 0) {
+                iRe[j] = xre[u];
+                iIm[j] = xim[u];
+            } else if (u == -2) {
+                double d = zr[j] * zr[j] + zx[j] * zx[j];
+                iRe[j] = (vr * zr[j] + vi * zx[j]) / d;
+                iIm[j] = (vi * zr[j] - vr * zx[j]) / d;
+            } else {
+                iRe[j] = kind[j] == Element.Kind.CURRENT_SOURCE ? -value[j] : 0;
+                iIm[j] = 0;
+            }
         }
     }
 

@@ -28,6 +28,21 @@ public record TuningResult(LinkDesign design, double c1, double c2, double c1Tex
         notes = List.copyOf(notes);
     }
 
+    /**
+     * A fresh solver on the tuned network (capacitors as sized, the load at its solved AC
+     * resistance, a battery at its equivalent, the source at its value), ready for
+     * {@link org.tankwright.circuit.Sweeps} or further solves.
+     */
+    public org.tankwright.circuit.PhasorSolver newSolver() {
+        double rl = design.topology().isLink() ? operatingPoint.loadAc() : 0;
+        org.tankwright.circuit.PhasorSolver s = new org.tankwright.circuit.PhasorSolver(Tuner.network(design, c1, c2,
+                Double.isInfinite(rl) ? 1 : rl));
+        if (design.topology().isLink()) {
+            s.setResistance(s.indexOf(org.tankwright.circuit.Topologies.LOAD), rl);
+        }
+        return s;
+    }
+
     /** Resonant frequency of a single tank, 1/(2π√(LC)). */
     public double tankResonantFrequency() {
         return 1 / (2 * Math.PI * Math.sqrt(design.coils().l1() * c1));

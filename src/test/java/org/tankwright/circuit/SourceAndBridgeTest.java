@@ -46,16 +46,21 @@ class SourceAndBridgeTest {
         assertEquals(Math.sqrt(2) * c.vRms() + 150, c.vPeak(), 1e-9 * c.vPeak(), "MODELS.md §3: DC bias Vdc/2 on the series capacitor");
     }
 
-    @Test
-    void turnOffCurrentOfASquareWaveIsCrestTimesSinPhase() {
-        // Square-wave drive, current lagging by φ: at each edge i = √2·I·sin φ (common practice).
+    /** A series tank at 100 kHz whose capacitor is {@code factor} times the resonant value, driven by a full bridge. */
+    private static OperatingPoint detunedTank(double factor, double duty, BridgeParts parts) {
         double f = 100e3;
         double w = 2 * Math.PI * f;
         double l = 20e-6;
-        Source s = Source.fullBridge(200, 1);
-        // detune the capacitor so the tank is inductive
-        Network net = Topologies.tank(Topology.SERIES_TANK, l, 1.0, CapacitorSpec.ideal(1.05 / (w * w * l)), s);
-        OperatingPoint op = OperatingPoint.solve(net, Topology.SERIES_TANK, s, null, f, new BridgeParts(300e-12, 200e-9));
+        Source s = Source.fullBridge(200, duty);
+        Network net = Topologies.tank(Topology.SERIES_TANK, l, 1.0, CapacitorSpec.ideal(factor / (w * w * l)), s);
+        return OperatingPoint.solve(net, Topology.SERIES_TANK, s, null, f, parts);
+    }
+
+    @Test
+    void turnOffCurrentOfASquareWaveIsCrestTimesSinPhase() {
+        // Square-wave drive, current lagging by φ: at each edge i = √2·I·sin φ (common practice).
+        // a larger capacitor than resonant: the tank is inductive
+        OperatingPoint op = detunedTank(1.05, 1, new BridgeParts(300e-12, 200e-9));
         double expected = Math.sqrt(2) * op.sourceCurrent() * Math.sin(Math.toRadians(op.inputPhaseDeg()));
         assertEquals(expected, op.bridge().turnOffLeading(), 1e-9 * expected);
         assertEquals(expected, op.bridge().turnOffLagging(), 1e-9 * expected);
@@ -68,24 +73,14 @@ class SourceAndBridgeTest {
 
     @Test
     void capacitiveTankLosesZvs() {
-        double f = 100e3;
-        double w = 2 * Math.PI * f;
-        double l = 20e-6;
-        Source s = Source.fullBridge(200, 1);
-        Network net = Topologies.tank(Topology.SERIES_TANK, l, 1.0, CapacitorSpec.ideal(0.95 / (w * w * l)), s);
-        OperatingPoint op = OperatingPoint.solve(net, Topology.SERIES_TANK, s, null, f, BridgeParts.NONE);
+        OperatingPoint op = detunedTank(0.95, 1, BridgeParts.NONE);
         assertTrue(op.inputPhaseDeg() < 0);
         assertFalse(op.bridge().zvs(), "capacitive load: the current has already reversed at the edge");
     }
 
     @Test
     void phaseShiftMakesTheLaggingLegHarder() {
-        double f = 100e3;
-        double w = 2 * Math.PI * f;
-        double l = 20e-6;
-        Source s = Source.fullBridge(200, 0.6);
-        Network net = Topologies.tank(Topology.SERIES_TANK, l, 1.0, CapacitorSpec.ideal(1.1 / (w * w * l)), s);
-        OperatingPoint op = OperatingPoint.solve(net, Topology.SERIES_TANK, s, null, f, BridgeParts.NONE);
+        OperatingPoint op = detunedTank(1.1, 0.6, BridgeParts.NONE);
         assertTrue(op.bridge().turnOffLeading() > op.bridge().turnOffLagging(),
                 "common practice (phase-shifted bridge): the leading leg switches a larger current");
     }
