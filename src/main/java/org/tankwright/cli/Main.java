@@ -12,6 +12,8 @@ import picocli.CommandLine.Command;
                 CommandLine.HelpCommand.class,
                 OpenCommand.class,
                 ValidateCommand.class,
+                CapsCommand.class,
+                RetuneCommand.class,
         })
 public final class Main implements Runnable {
 
