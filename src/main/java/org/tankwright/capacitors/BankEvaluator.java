@@ -84,7 +84,7 @@ public final class BankEvaluator {
         // main array impedance n/m × part impedance
         double zr = facts(p)[0] * n / m;
         double zi = (omega * p.esl() - 1 / (omega * p.capacitance())) * n / m;
-        double mainMag = Math.hypot(zr, zi);
+        double mainMag = magnitude(zr, zi);
         double br = zr;
         double bi = zi;
         double tr = 0;
@@ -106,7 +106,7 @@ public final class BankEvaluator {
                 bi = (ni * dr - nr * di) / d2;
             }
         }
-        double bankMag = Math.hypot(br, bi);
+        double bankMag = magnitude(br, bi);
         double vBank = Math.max(s.voltageRms(), s.currentRms() * bankMag);
         double iBank = Math.max(s.currentRms(), s.voltageRms() / bankMag);
         double crest = s.crestFactor();
@@ -127,13 +127,13 @@ public final class BankEvaluator {
             iMain = vBank / mainMag;
             dcMain = s.dcBias();
             vTrim = vBank;
-            iTrim = vBank / Math.hypot(tr, ti);
+            iTrim = vBank / magnitude(tr, ti);
             dcTrim = s.dcBias();
         } else {
             iMain = iBank;
             vMain = iBank * mainMag;
             iTrim = iBank;
-            vTrim = iBank * Math.hypot(tr, ti);
+            vTrim = iBank * magnitude(tr, ti);
             double cm = layout.mainCapacitance();
             double ct = t.capacitance();
             dcMain = s.dcBias() * ct / (cm + ct); // capacitive (balanced) division of the DC
@@ -201,6 +201,11 @@ public final class BankEvaluator {
         }
         return new PartDuty(role, p, count, vrms, vdc, peak, irms, pd, dvdt, vLimit, peakLimit, iLimit, pLimit,
                 dvdtLimit, srf, srfLimit, 1 - ratio, worst);
+    }
+
+    /** |x + jy|; plain √ (Math.hypot guards against overflow these values never reach, slowly). */
+    private static double magnitude(double x, double y) {
+        return Math.sqrt(x * x + y * y);
     }
 
     private static double ratio(double stress, double limit) {

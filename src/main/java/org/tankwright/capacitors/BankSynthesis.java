@@ -75,9 +75,7 @@ public final class BankSynthesis {
             for (CapacitorPart p : usable) {
                 double c = p.capacitance();
                 for (int n = 1; n <= req.maxSeries(); n++) {
-                    if (overVoltageAtAnyM(p, n)) {
-                        continue;
-                    }
+                    // no voltage pruning here: the few untrimmed layouts that fail explain the near misses
                     int m0 = Math.max(1, (int) Math.ceil(lo * n / c * (1 - SLACK)));
                     int m1 = Math.min(req.maxParallel(), (int) Math.floor(hi * n / c * (1 + SLACK)));
                     for (int m = m0; m <= m1 && n * m <= threshold(); m++) {
@@ -161,27 +159,84 @@ public final class BankSynthesis {
             }
         }
 
+        /**
+         * Trims of one position for the main array (p, n, m), in order of rising |deviation|
+         * (the bank capacitance rises with the trim's in both positions, so |deviation| falls then
+         * rises along the sorted parts): once one is feasible, only trims with the same
+         * |deviation| can still be the best of this part/series/parallel, so the scan stops there.
+         */
         private void scanTrims(CapacitorPart p, int n, int m, TrimPosition pos, double tLo, double tHi) {
-            int i = Arrays.binarySearch(caps, tLo * (1 - SLACK));
-            i = i < 0 ? -i - 1 : i;
-            while (i > 0 && caps[i - 1] >= tLo * (1 - SLACK)) {
+            if (untrimmedKept(p, n, m)) {
+                return; // the same array without trim is feasible and has fewer parts
+            }
+            int lo = firstAtLeast(tLo * (1 - SLACK));
+            int hi = firstAtLeast(Math.nextUp(tHi * (1 + SLACK))) - 1;
+            if (lo > hi) {
+                return;
+            }
+            double t = req.targetCapacitance();
+            double cm = m * p.capacitance() / n;
+            double ideal = pos == TrimPosition.PARALLEL ? t - cm : (cm > t ? 1 / (1 / t - 1 / cm) : Double.POSITIVE_INFINITY);
+            int right = Math.max(lo, Math.min(hi + 1, firstAtLeast(ideal)));
+            int left = right - 1;
+            double found = Double.NaN;
+            while (left >= lo || right <= hi) {
+                double dl = left >= lo ? absDeviation(cm, caps[left], pos) : Double.POSITIVE_INFINITY;
+                double dr = right <= hi ? absDeviation(cm, caps[right], pos) : Double.POSITIVE_INFINITY;
+                int i;
+                double d;
+                if (dl <= dr) {
+                    i = left--;
+                    d = dl;
+                } else {
+                    i = right++;
+                    d = dr;
+                }
+                if (d > found) { // false while found is NaN
+                    return;
+                }
+                if (consider(new BankLayout(p, n, m, usable[i], pos)) && Double.isNaN(found)) {
+                    found = d;
+                }
+            }
+        }
+
+        private double absDeviation(double cm, double ct, TrimPosition pos) {
+            double c = pos == TrimPosition.PARALLEL ? cm + ct : cm * ct / (cm + ct); // as BankLayout.capacitance()
+            return Math.abs(c / req.targetCapacitance() - 1);
+        }
+
+        private int firstAtLeast(double c) {
+            int i = Arrays.binarySearch(caps, c);
+            if (i < 0) {
+                return -i - 1;
+            }
+            while (i > 0 && caps[i - 1] >= c) {
                 i--;
             }
-            double top = tHi * (1 + SLACK);
-            for (; i < caps.length && caps[i] <= top; i++) {
-                consider(new BankLayout(p, n, m, usable[i], pos));
+            return i;
+        }
+
+        private boolean untrimmedKept(CapacitorPart p, int n, int m) {
+            for (CapacitorBank b : best) {
+                BankLayout l = b.layout();
+                if (l.trim() == null && l.part() == p && l.series() == n && l.parallel() == m) {
+                    return true;
+                }
             }
+            return false;
         }
 
         private int threshold() {
             return best.size() < req.alternatives() ? Integer.MAX_VALUE : best.get(best.size() - 1).partCount();
         }
 
-        private void consider(BankLayout layout) {
+        /** Evaluates one layout within the deviation; true when it is feasible (and offered). */
+        private boolean consider(BankLayout layout) {
             evaluated++;
             double dev = layout.capacitance() / req.targetCapacitance() - 1;
             if (Math.abs(dev) > req.maxDeviation()) {
-                return;
+                return false;
             }
             CapacitorBank b = eval.evaluate(layout, false);
             if (!b.feasible()) {
@@ -190,9 +245,10 @@ public final class BankSynthesis {
                 if (old == null || ORDER.compare(b, old) < 0) {
                     misses.put(why, b);
                 }
-                return;
+                return false;
             }
             offer(best, b, req.alternatives());
+            return true;
         }
     }
 

@@ -82,7 +82,7 @@ public record CapacitorPart(String id, String description, double capacitance, d
             positive(who, "max_dissipation_W", maxDissipation, "watts");
         }
         if (maxCaseTemperature != null) {
-            finite(who, "max_case_temperature_C", maxCaseTemperature);
+            finite(who, "max_case_temperature_degC", maxCaseTemperature);
         }
         if (price != null && !(price >= 0 && Double.isFinite(price))) {
             throw new IllegalArgumentException(who + "price = " + price + ": must be zero or positive");

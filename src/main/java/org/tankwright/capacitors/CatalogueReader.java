@@ -50,7 +50,7 @@ public final class CatalogueReader {
         FIELDS.put("current_rating_A", Dimension.CURRENT);
         FIELDS.put("dvdt_V_per_s", Dimension.VOLTAGE_RATE);
         FIELDS.put("max_dissipation_W", Dimension.POWER);
-        FIELDS.put("max_case_temperature_C", Dimension.TEMPERATURE);
+        FIELDS.put("max_case_temperature_degC", Dimension.TEMPERATURE);
         FIELDS.put("price", Dimension.DIMENSIONLESS);
         FIELDS.put("note", null);
     }
@@ -256,7 +256,7 @@ public final class CatalogueReader {
                     .dcRating(number("dc_rating_V", Double.NaN))
                     .currentRating(number("current_rating_A", Double.NaN))
                     .acRating(optional("ac_rating_V")).dvdtRating(optional("dvdt_V_per_s"))
-                    .maxDissipation(optional("max_dissipation_W")).maxCaseTemperature(optional("max_case_temperature_C"))
+                    .maxDissipation(optional("max_dissipation_W")).maxCaseTemperature(optional("max_case_temperature_degC"))
                     .price(optional("price")).acRatingTable(table());
             if (row.get("tempco_ppm_per_K") != null) {
                 b.tempcoPpmPerK(number("tempco_ppm_per_K", 0));

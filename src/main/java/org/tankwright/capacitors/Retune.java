@@ -126,7 +126,11 @@ public final class Retune {
     private static List<TrimOption> options(String position, double wanted, List<CapacitorPart> catalogue,
                                             double installed, double inductance, double designFrequency) {
         List<TrimOption> out = new ArrayList<>();
-        if (catalogue == null || catalogue.isEmpty() || wanted == 0) {
+        if (catalogue == null || wanted == 0) {
+            return out;
+        }
+        catalogue = catalogue.stream().filter(p -> p.dielectric().suitsResonantTank()).toList(); // no class-2, no polyester
+        if (catalogue.isEmpty()) {
             return out;
         }
         CapacitorPart bestSingle = null;

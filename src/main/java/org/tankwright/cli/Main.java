@@ -14,6 +14,8 @@ import picocli.CommandLine.Command;
                 ValidateCommand.class,
                 TuneCommand.class,
                 WorkpieceCommand.class,
+                CapsCommand.class,
+                RetuneCommand.class,
         })
 public final class Main implements Runnable {
 

@@ -42,7 +42,7 @@ class ToleranceStudyTest {
 
     @Test
     void resonantFrequencyMeanAndSpreadMatchClosedForm() {
-        int n = 200_000;
+        int n = 100_000;
         OutcomeStats f = resonance(n).run().outcome("f0");
         double l1 = L0 * (1 - TL), l2 = L0 * (1 + TL), c1 = C0 * (1 - TC), c2 = C0 * (1 + TC);
         double mean = invSqrtMean(l1, l2) * invSqrtMean(c1, c2) / (2 * Math.PI);
@@ -92,7 +92,7 @@ class ToleranceStudyTest {
 
     @Test
     void normalSpreadHasSigmaOfATHirdOfTolerance() {
-        int n = 200_000;
+        int n = 100_000;
         StudyResult r = ToleranceStudy.of(List.of(Parameter.normal("C", 1.0, 0.06)), List.of("C"), (p, o) -> o[0] = p[0])
                 .withSamples(n).withSeed(7).run();
         OutcomeStats c = r.outcome("C");
