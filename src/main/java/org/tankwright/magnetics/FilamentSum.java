@@ -1,0 +1,62 @@
+package org.tankwright.magnetics;
+
+import java.util.List;
+
+/**
+ * Inductance as a sum over filaments: L = Σ self terms + Σ_{i≠j} M_ij. Rings must be coaxial (on one
+ * axis parallel to z); segments pair with segments. Self terms: {@link MutualKernels#ringSelf} and
+ * {@link MutualKernels#segmentSelf} with each filament's wire radius (uniform current).
+ */
+public final class FilamentSum {
+    private FilamentSum() {
+    }
+
+    /** Self inductance of filaments carrying one current in series, H. */
+    public static double selfInductance(List<Filament> filaments) {
+        int n = filaments.size();
+        double sum = 0.0;
+        for (int i = 0; i < n; i++) {
+            Filament fi = filaments.get(i);
+            sum += self(fi);
+            for (int j = i + 1; j < n; j++) {
+                sum += 2.0 * mutual(fi, filaments.get(j));
+            }
+        }
+        return sum;
+    }
+
+    /** Mutual inductance between two coils given as filaments, H (each list in series). */
+    public static double mutualInductance(List<Filament> a, List<Filament> b) {
+        double sum = 0.0;
+        for (Filament fa : a) {
+            for (Filament fb : b) {
+                sum += mutual(fa, fb);
+            }
+        }
+        return sum;
+    }
+
+    /** Self inductance of one filament with its wire radius, H. */
+    public static double self(Filament f) {
+        if (f instanceof Ring r) {
+            return MutualKernels.ringSelf(r.radius(), r.wireRadius());
+        }
+        Segment s = (Segment) f;
+        return MutualKernels.segmentSelf(s.length(), s.wireRadius());
+    }
+
+    /** Mutual inductance of two distinct filaments, H: coaxial rings (Maxwell) or two segments (Neumann). */
+    public static double mutual(Filament a, Filament b) {
+        if (a instanceof Ring ra && b instanceof Ring rb) {
+            double scale = Math.max(ra.radius(), rb.radius());
+            if (Math.abs(ra.x() - rb.x()) > 1e-12 * scale || Math.abs(ra.y() - rb.y()) > 1e-12 * scale) {
+                throw new IllegalArgumentException("rings are not coaxial; the filament sum handles coaxial rings only");
+            }
+            return MutualKernels.coaxialRings(ra.radius(), rb.radius(), rb.z() - ra.z());
+        }
+        if (a instanceof Segment sa && b instanceof Segment sb) {
+            return MutualKernels.segments(sa, sb);
+        }
+        throw new IllegalArgumentException("a ring and a segment cannot be paired in the filament sum");
+    }
+}
