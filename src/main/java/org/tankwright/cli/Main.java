@@ -10,6 +10,8 @@ import picocli.CommandLine.Command;
         description = "Design and tune resonant inductive circuits: wireless-power links and induction heaters.",
         subcommands = {
                 CommandLine.HelpCommand.class,
+                CoupleCommand.class,
+                FieldCommand.class,
         })
 public final class Main implements Runnable {
 
