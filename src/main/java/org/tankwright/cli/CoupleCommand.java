@@ -246,11 +246,7 @@ public final class CoupleCommand implements Callable<Integer> {
         Map<String, Object> m = new LinkedHashMap<>();
         CouplingResult any = at != null ? at : !sweep.isEmpty() ? sweep.get(0) : range.highest();
         if (at != null) {
-            m.put("mutual_H", at.mutual());
-            m.put("k", at.k());
-            m.put("inductance_a_H", at.inductanceA());
-            m.put("inductance_b_H", at.inductanceB());
-            m.put("gap_m", at.gap());
+            m.putAll(point(at));
             m.put("distance_m", at.distance());
             m.put("offset_x_m", at.offsetX());
             m.put("offset_y_m", at.offsetY());
