@@ -16,6 +16,8 @@ import picocli.CommandLine.Command;
                 WorkpieceCommand.class,
                 CapsCommand.class,
                 RetuneCommand.class,
+                CoupleCommand.class,
+                FieldCommand.class,
         })
 public final class Main implements Runnable {
 

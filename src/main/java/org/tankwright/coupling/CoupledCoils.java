@@ -26,13 +26,26 @@ public final class CoupledCoils {
      * @param filaments     its filaments in its own frame
      * @param selfInductance its free-space self-inductance from the coil model, henries (&gt; 0)
      * @param plate         its backing plate, or null
+     * @param below         distance from the winding's mean plane down to its lowest conductor surface, m,
+     *                      or NaN to take it from the filaments and their wire radii
+     * @param above         distance from the mean plane up to the highest conductor surface, m, or NaN
      */
-    public record Coil(String name, List<? extends Filament> filaments, double selfInductance, BackingPlate plate) {
+    public record Coil(String name, List<? extends Filament> filaments, double selfInductance, BackingPlate plate,
+                       double below, double above) {
         public Coil {
             if (!(selfInductance > 0) || Double.isInfinite(selfInductance)) {
                 throw new IllegalArgumentException("coil " + name + ": self-inductance must be > 0, got " + selfInductance + " H");
             }
+            if (!(Double.isNaN(below) || below >= 0) || !(Double.isNaN(above) || above >= 0)
+                    || Double.isInfinite(below) || Double.isInfinite(above)) {
+                throw new IllegalArgumentException("coil " + name + ": conductor extents must be ≥ 0, got " + below + ", " + above);
+            }
             filaments = List.copyOf(filaments);
+        }
+
+        /** A coil whose conductor surfaces follow from its filaments' wire radii. */
+        public Coil(String name, List<? extends Filament> filaments, double selfInductance, BackingPlate plate) {
+            this(name, filaments, selfInductance, plate, Double.NaN, Double.NaN);
         }
     }
 
@@ -73,10 +86,10 @@ public final class CoupledCoils {
         FilamentSet rawB = FilamentSet.of(coilB.filaments());
         a = rawA.transformed(false, 0, 0, -rawA.zMean(), 1);
         b = rawB.transformed(false, 0, 0, -rawB.zMean(), 1);
-        aTop = a.zMax();
-        aBottom = a.zMin();
-        bTop = b.zMax();
-        bBottom = b.zMin();
+        aTop = Double.isNaN(coilA.above()) ? a.zMax() : coilA.above();
+        aBottom = Double.isNaN(coilA.below()) ? a.zMin() : -coilA.below();
+        bTop = Double.isNaN(coilB.above()) ? b.zMax() : coilB.above();
+        bBottom = Double.isNaN(coilB.below()) ? b.zMin() : -coilB.below();
         radiusSum = a.outerRadius() + b.outerRadius();
         etaA = coilA.plate() == null ? 0 : coilA.plate().imageCoefficient(a.meanRadius());
         etaB = coilB.plate() == null ? 0 : coilB.plate().imageCoefficient(b.meanRadius());
