@@ -21,11 +21,11 @@ import java.util.concurrent.Callable;
 
 /** {@code tankwright tune}: sizes the compensation of a link or a tank from entered L, R, M values and prints its operating point. */
 @Command(name = "tune", mixinStandardHelpOptions = true,
-        description = {"Size the compensation capacitors of a two-coil link (SS, SP, PS, PP) or a single series or",
-                "parallel tank from entered values, and print the operating point: impedance, phase, power,",
-                "efficiency and every coil's and capacitor's voltage and current.",
-                "Caution: resonant capacitors carry many times the supply voltage; treat every node as live",
-                "and follow local codes and licensed practice."})
+        description = {"Size the compensation capacitors of a two-coil link (SS, SP, PS, PP) or a single series or "
+                + "parallel tank from entered values, and print the operating point: impedance, phase, power, "
+                + "efficiency and every coil's and capacitor's voltage and current.",
+                "Caution: resonant capacitors carry many times the supply voltage; treat every node as live "
+                        + "and follow local codes and licensed practice."})
 public final class TuneCommand implements Callable<Integer> {
     @Option(names = "--topology", required = true, description = "SS, SP, PS, PP, series or parallel")
     String topology;
