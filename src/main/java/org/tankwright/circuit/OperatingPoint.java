@@ -55,6 +55,9 @@ public record OperatingPoint(Topology topology, double frequency, Source source,
                                     BridgeParts parts) {
         Network net = s.network();
         int src = net.sourceIndex();
+        if (!(source.fundamentalRms() > 0)) {
+            throw new IllegalArgumentException("source amplitude " + source.value() + " gives no drive: it must be positive");
+        }
         s.setSourceValue(src, source.fundamentalRms());
         List<String> warnings = new ArrayList<>();
         boolean hasLoad = net.has(Topologies.LOAD);
@@ -164,6 +167,14 @@ public record OperatingPoint(Topology topology, double frequency, Source source,
         return false;
     }
 
+    private void putPair(Map<String, Object> m, String key1, String key2, String el1, String el2,
+                         java.util.function.ToDoubleFunction<ElementStress> value) {
+        m.put(key1, value.applyAsDouble(stress(el1)));
+        if (has(el2)) {
+            m.put(key2, value.applyAsDouble(stress(el2)));
+        }
+    }
+
     /** Sum of all element losses except the load's (W): coil, capacitor and source resistances. */
     public double losses() {
         double sum = 0;
@@ -194,26 +205,12 @@ public record OperatingPoint(Topology topology, double frequency, Source source,
         if (source.isBridge()) {
             m.put("i_dc_A", dcCurrent);
         }
-        m.put("i_l1_A", stress(Topologies.L1).iRms());
-        if (has(Topologies.L2)) {
-            m.put("i_l2_A", stress(Topologies.L2).iRms());
-        }
-        m.put("v_l1_V", stress(Topologies.L1).vRms());
-        if (has(Topologies.L2)) {
-            m.put("v_l2_V", stress(Topologies.L2).vRms());
-        }
-        m.put("v_c1_V", stress(Topologies.C1).vRms());
-        if (has(Topologies.C2)) {
-            m.put("v_c2_V", stress(Topologies.C2).vRms());
-        }
-        m.put("i_c1_A", stress(Topologies.C1).iRms());
-        if (has(Topologies.C2)) {
-            m.put("i_c2_A", stress(Topologies.C2).iRms());
-        }
-        m.put("v_c1_peak_V", stress(Topologies.C1).vPeak());
-        if (has(Topologies.C2)) {
-            m.put("v_c2_peak_V", stress(Topologies.C2).vPeak());
-        }
+        // primary and secondary pairs in the contract's order; secondary keys only for a link
+        putPair(m, "i_l1_A", "i_l2_A", Topologies.L1, Topologies.L2, ElementStress::iRms);
+        putPair(m, "v_l1_V", "v_l2_V", Topologies.L1, Topologies.L2, ElementStress::vRms);
+        putPair(m, "v_c1_V", "v_c2_V", Topologies.C1, Topologies.C2, ElementStress::vRms);
+        putPair(m, "i_c1_A", "i_c2_A", Topologies.C1, Topologies.C2, ElementStress::iRms);
+        putPair(m, "v_c1_peak_V", "v_c2_peak_V", Topologies.C1, Topologies.C2, ElementStress::vPeak);
         if (has(Topologies.LOAD)) {
             m.put("load_ac_ohm", Double.isInfinite(loadAc) ? "open" : loadAc);
             m.put("v_out_V", outputVoltage);

@@ -13,6 +13,8 @@ import java.util.List;
  * coupling needs no new network). Not thread-safe: use one solver per thread.
  */
 public final class PhasorSolver {
+    /** Squared ratio of the smallest to the largest pivot below which the system counts as singular (1e-14). */
+    private static final double SINGULAR_RATIO_SQUARED = 1e-28;
     private final Network network;
     private final int nodes;
     private final int count;
@@ -284,6 +286,8 @@ public final class PhasorSolver {
     /** Gaussian elimination with partial pivoting, in place; the solution replaces the right-hand side. */
     private void eliminate() {
         final int n = size;
+        double maxPivot = 0;
+        double minPivot = Double.POSITIVE_INFINITY;
         for (int col = 0; col < n; col++) {
             int piv = col;
             double best = are[col * n + col] * are[col * n + col] + aim[col * n + col] * aim[col * n + col];
@@ -301,6 +305,8 @@ public final class PhasorSolver {
             if (piv != col) {
                 swapRows(piv, col);
             }
+            maxPivot = Math.max(maxPivot, best);
+            minPivot = Math.min(minPivot, best);
             double pr = are[col * n + col];
             double pi = aim[col * n + col];
             double inv = 1 / (pr * pr + pi * pi);
@@ -323,6 +329,10 @@ public final class PhasorSolver {
                 xre[row] -= fr * xre[col] - fi * xim[col];
                 xim[row] -= fr * xim[col] + fi * xre[col];
             }
+        }
+        if (minPivot < SINGULAR_RATIO_SQUARED * maxPivot) {
+            throw new IllegalStateException("the network is singular at " + frequency + " Hz: a lossless resonance "
+                    + "(enter the coil and capacitor resistances) or a floating node");
         }
         for (int row = n - 1; row >= 0; row--) {
             double sr = xre[row];

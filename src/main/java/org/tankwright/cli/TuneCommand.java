@@ -21,11 +21,11 @@ import java.util.concurrent.Callable;
 
 /** {@code tankwright tune}: sizes the compensation of a link or a tank from entered L, R, M values and prints its operating point. */
 @Command(name = "tune", mixinStandardHelpOptions = true,
-        description = {"Size the compensation capacitors of a two-coil link (SS, SP, PS, PP) or a single series or",
-                "parallel tank from entered values, and print the operating point: impedance, phase, power,",
-                "efficiency and every coil's and capacitor's voltage and current.",
-                "Caution: resonant capacitors carry many times the supply voltage; treat every node as live",
-                "and follow local codes and licensed practice."})
+        description = {"Size the compensation capacitors of a two-coil link (SS, SP, PS, PP) or a single series or "
+                + "parallel tank from entered values, and print the operating point: impedance, phase, power, "
+                + "efficiency and every coil's and capacitor's voltage and current.",
+                "Caution: resonant capacitors carry many times the supply voltage; treat every node as live "
+                        + "and follow local codes and licensed practice."})
 public final class TuneCommand implements Callable<Integer> {
     @Option(names = "--topology", required = true, description = "SS, SP, PS, PP, series or parallel")
     String topology;
@@ -72,7 +72,14 @@ public final class TuneCommand implements Callable<Integer> {
             throw usage("--topology: " + e.getMessage());
         }
         LinkDesign design = t.isLink() ? linkDesign(t) : tankDesign(t);
-        TuningResult result = Tuner.tune(design);
+        TuningResult result;
+        try {
+            result = Tuner.tune(design);
+        } catch (IllegalStateException e) {
+            throw new ExitCodes.UserError(ExitCodes.REFUSED, "computation refused: " + e.getMessage());
+        } catch (IllegalArgumentException e) {
+            throw invalid(e.getMessage());
+        }
         if (json) {
             CliSupport.printJson(result.keyValues(), out);
         } else {
@@ -276,8 +283,9 @@ public final class TuneCommand implements Callable<Integer> {
         row("input impedance", Quantities.format(op.inputImpedance().re(), Dimension.RESISTANCE, 4) + " "
                 + (op.inputImpedance().im() < 0 ? "− j" : "+ j")
                 + Quantities.format(Math.abs(op.inputImpedance().im()), Dimension.RESISTANCE, 4));
-        row("input phase", Quantities.format(op.inputPhaseDeg(), Dimension.ANGLE, 3)
-                + (op.inputPhaseDeg() >= 0 ? " (inductive)" : " (capacitive)"));
+        double phase = Math.abs(op.inputPhaseDeg()) < 1e-9 ? 0 : op.inputPhaseDeg();
+        row("input phase", Quantities.format(phase, Dimension.ANGLE, 3)
+                + (phase > 0 ? " (inductive)" : phase < 0 ? " (capacitive)" : " (resistive)"));
         row("power in / out", Quantities.format(op.pIn(), Dimension.POWER, 4) + " / "
                 + Quantities.format(op.pOut(), Dimension.POWER, 4));
         row("efficiency", Quantities.format(op.efficiency(), Dimension.FRACTION, 4));

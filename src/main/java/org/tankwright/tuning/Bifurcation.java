@@ -53,9 +53,21 @@ public final class Bifurcation {
         return out;
     }
 
-    /** Number of zero-phase frequencies in [f/2, 2f]. */
+    /** Number of zero-phase frequencies in [f/2, 2f] (sign changes on the grid, without refining them). */
     public static int count(PhasorSolver s, double f) {
-        return zeroPhaseFrequencies(s, f).length;
+        int src = s.network().sourceIndex();
+        double fMin = f / 2;
+        double ratio = 4;
+        double prevQ = reactive(s, src, fMin);
+        int n = prevQ == 0 ? 1 : 0;
+        for (int i = 1; i < GRID; i++) {
+            double q = reactive(s, src, fMin * Math.pow(ratio, (double) i / (GRID - 1)));
+            if (q == 0 || (prevQ != 0 && (q > 0) != (prevQ > 0))) {
+                n++;
+            }
+            prevQ = q;
+        }
+        return n;
     }
 
     private static double reactive(PhasorSolver s, int src, double f) {

@@ -116,7 +116,7 @@ public final class Tuner {
         double c = TextbookCompensation.c1(t, v, w, rLoad);
         if (!(c > 0) || Double.isInfinite(c)) {
             throw new IllegalArgumentException("the textbook C1 of " + t + " is not defined at load " + rLoad
-                    + " Ω (a PS primary needs a load resistance above 0)");
+                    + " Ω (PS needs a load resistance above 0, PP a finite one)");
         }
         return c;
     }

@@ -115,5 +115,10 @@ class TuneCommandTest {
                 "--load", "5", "--frequency", "85k", "--vin", "10"));
         assertTrue(err.toString(StandardCharsets.UTF_8).contains("mutual inductance"));
         assertFalse(err.toString(StandardCharsets.UTF_8).contains("at org."), "no stack trace");
+        err.reset();
+        // a lossless series tank at resonance shorts the source: refused, with the reason
+        assertEquals(ExitCodes.REFUSED, run("tune", "--topology", "series", "--l", "2u", "--f0", "150k", "--vin", "10"));
+        String msg = err.toString(StandardCharsets.UTF_8);
+        assertTrue(msg.contains("singular") && !msg.contains("Exception"), msg);
     }
 }

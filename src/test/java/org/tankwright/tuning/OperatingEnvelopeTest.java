@@ -49,6 +49,9 @@ class OperatingEnvelopeTest {
             assertTrue(w > 0);
         }
         assertTrue(e.trip().primaryOverCurrent() > e.worst().get(Stress.I_L1).value());
+        assertEquals(1.1 * e.worst().get(Stress.I_L1).value(), e.trip().primaryOverCurrent(), 1e-9, "10 % margin");
+        // holding the output power, the hottest coils (largest resistance, 1 + α·80 K) lose the most
+        assertEquals(100, e.worst().get(Stress.LOSSES).at().temperatureC(), 1e-9);
     }
 
     @Test
