@@ -107,4 +107,18 @@ class BankArithmeticTest {
         assertEquals(b.currentRms() * share, b.main().currentRms(), 1e-9);
         assertFalse(b.warnings().stream().noneMatch(w -> w.contains("layout and ESL")));
     }
+
+    @Test
+    void bankFeedsTheToleranceStudy() {
+        CapacitorPart p = CapacitorPart.builder("c", 10e-9, Dielectric.C0G).tolerance(0.02).build();
+        CapacitorPart t = CapacitorPart.builder("t", 1e-9, Dielectric.C0G).tolerance(0.10).build();
+        BankLayout l = new BankLayout(p, 1, 2, t, TrimPosition.PARALLEL);
+        CapacitorBank b = evaluator(21e-9, 100, 0).evaluate(l);
+        // parallel: worst-case relative tolerance is the capacitance-weighted mean
+        assertEquals((20e-9 * 0.02 + 1e-9 * 0.10) / 21e-9, b.tolerance(), 1e-15);
+        var param = b.toleranceParameter("C1");
+        assertEquals(b.capacitance(), param.nominal(), 0);
+        assertEquals(b.tolerance(), param.spread().tolerance(), 0);
+        assertEquals(30e-6, param.tempcoSpreadPerK(), 1e-18, "C0G: 0 ± 30 ppm/K (EIA class-1 code)");
+    }
 }
