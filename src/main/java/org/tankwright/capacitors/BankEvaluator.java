@@ -14,6 +14,8 @@ import java.util.List;
  * practice for DC across series parts). Stress: the bank carries the worse of the given rms
  * voltage and the one the given current implies (and likewise for current), since for a
  * capacitor the two are tied by its impedance.
+ *
+ * <p>Not thread-safe (it caches each part's ESR and AC rating at the frequency): one per search.
  */
 public final class BankEvaluator {
     private static final double FAR_OVER = 1e6;

@@ -39,6 +39,15 @@ public record CapacitorBank(BankLayout layout, double capacitance, double deviat
         return trim != null && trim.worstMargin() < main.worstMargin() ? trim : main;
     }
 
+    /**
+     * The bank as a tolerance-study parameter: uniform within its tolerance, drifting with its
+     * tempco, the tempco scattered as the main part's dielectric does.
+     */
+    public org.tankwright.tolerance.Parameter toleranceParameter(String name) {
+        return org.tankwright.tolerance.Parameter.uniform(name, capacitance, tolerance)
+                .withTempcoPpm(tempcoPpmPerK, layout.part().dielectric().tempcoSpreadPpmPerK());
+    }
+
     /** True when every part is within its derated limits. */
     public boolean feasible() {
         return main.withinLimits() && (trim == null || trim.withinLimits());

@@ -13,26 +13,28 @@ import java.util.stream.Collectors;
  * grows in importance), which the exponent carries; C0G and mica losses are nearly flat.
  */
 public enum Dielectric {
-    C0G("c0g", "C0G/NP0 class-1 ceramic", 1, 0.0, 0.0, true),
-    POLYPROPYLENE("polypropylene", "polypropylene film", 1, 0.35, -200.0, true),
-    POLYESTER("polyester", "polyester (PET) film", 1, 0.3, 400.0, false),
-    MICA("mica", "silver mica", 1, 0.0, 50.0, true),
-    CLASS2_CERAMIC("class2-ceramic", "class-2 ceramic (X7R and similar)", 2, 0.1, 0.0, false);
+    C0G("c0g", "C0G/NP0 class-1 ceramic", 1, 0.0, 0.0, 30.0, true),
+    POLYPROPYLENE("polypropylene", "polypropylene film", 1, 0.35, -200.0, 100.0, true),
+    POLYESTER("polyester", "polyester (PET) film", 1, 0.3, 400.0, 200.0, false),
+    MICA("mica", "silver mica", 1, 0.0, 50.0, 50.0, true),
+    CLASS2_CERAMIC("class2-ceramic", "class-2 ceramic (X7R and similar)", 2, 0.1, 0.0, 1500.0, false);
 
     private final String key;
     private final String description;
     private final int ceramicClass;
     private final double lossExponent;
     private final double typicalTempcoPpmPerK;
+    private final double tempcoSpreadPpmPerK;
     private final boolean suitsResonantTank;
 
     Dielectric(String key, String description, int ceramicClass, double lossExponent,
-               double typicalTempcoPpmPerK, boolean suitsResonantTank) {
+               double typicalTempcoPpmPerK, double tempcoSpreadPpmPerK, boolean suitsResonantTank) {
         this.key = key;
         this.description = description;
         this.ceramicClass = ceramicClass;
         this.lossExponent = lossExponent;
         this.typicalTempcoPpmPerK = typicalTempcoPpmPerK;
+        this.tempcoSpreadPpmPerK = tempcoSpreadPpmPerK;
         this.suitsResonantTank = suitsResonantTank;
     }
 
@@ -58,6 +60,15 @@ public enum Dielectric {
     /** Typical temperature coefficient (ppm/K) used when a part gives none (class 2: not linear, 0 here). */
     public double typicalTempcoPpmPerK() {
         return typicalTempcoPpmPerK;
+    }
+
+    /**
+     * Half-width of the tempco scatter between parts, ppm/K: C0G 0 ± 30 ppm/K is the EIA class-1
+     * code's definition; the others are typical (from memory). Class 2 is not linear
+     * (±15 % over −55 … 125 °C for X7R): ±1500 ppm/K is a crude linear stand-in.
+     */
+    public double tempcoSpreadPpmPerK() {
+        return tempcoSpreadPpmPerK;
     }
 
     /** Whether the dielectric is a usual choice for a high-Q resonant tank (common practice). */

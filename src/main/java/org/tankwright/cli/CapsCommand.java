@@ -112,7 +112,9 @@ public final class CapsCommand implements Callable<Integer> {
         }
         if (r.best() == null) {
             if (!json) {
-                System.err.println("tankwright: no bank fits within the bounds and limits; see the near misses above");
+                System.err.println("tankwright: no bank fits within the bounds and limits; " + (r.nearMisses().isEmpty()
+                        ? "try larger --max-series / --max-parallel, a larger --max-deviation or another catalogue"
+                        : "the near misses above say why"));
             }
             return ExitCodes.REFUSED;
         }
@@ -285,7 +287,7 @@ public final class CapsCommand implements Callable<Integer> {
         for (int k = 0; k < r.banks().size(); k++) {
             CapacitorBank b = r.banks().get(k);
             PartDuty w = b.worstDuty();
-            System.out.printf(Locale.ROOT, "%n%d. %s%n   %s (%+.2f %%), %d parts, ESR %s, ESL %s — %s%n",
+            System.out.printf(Locale.ROOT, "%n%d. %s%n   %s (%+.2f %%), %d part(s), ESR %s, ESL %s — %s%n",
                     k + 1, b.layout().describe(), q(b.capacitance(), Dimension.CAPACITANCE), 100 * b.deviation(),
                     b.partCount(), q(b.esr(), Dimension.RESISTANCE), q(b.esl(), Dimension.INDUCTANCE), r.verdicts().get(k));
             System.out.printf(Locale.ROOT, "   worst part %s: %s of %s rms, %s of %s peak, %s of %s, SRF %s; limit: %s (margin %.0f %%)%n",
@@ -302,7 +304,7 @@ public final class CapsCommand implements Callable<Integer> {
             System.out.println("Fewer parts do not fit:");
             for (CapacitorBank b : r.nearMisses()) {
                 PartDuty w = b.worstDuty();
-                System.out.printf(Locale.ROOT, "  %s (%d parts): %s over its limit on %s%n", b.layout().describe(),
+                System.out.printf(Locale.ROOT, "  %s (%d part(s)): %s over its limit on %s%n", b.layout().describe(),
                         b.partCount(), w.part().id(), w.limitingCheck());
             }
         }

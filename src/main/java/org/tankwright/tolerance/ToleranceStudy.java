@@ -74,6 +74,31 @@ public final class ToleranceStudy {
         return new ToleranceStudy(parameters, outcomes, model, TemperatureRange.REFERENCE_ONLY, List.of(), 10_000, 1L, 40);
     }
 
+    /**
+     * A study whose model takes and returns named values (convenient for an expensive model such
+     * as the whole analysis; it allocates per sample). An outcome the function leaves out counts
+     * as non-finite: that sample fails the yield.
+     */
+    public static ToleranceStudy ofNamed(List<Parameter> parameters, List<String> outcomes,
+                                         java.util.function.Function<Map<String, Double>, Map<String, Double>> model) {
+        if (model == null) {
+            throw new IllegalArgumentException("a study needs a model");
+        }
+        List<String> names = parameters.stream().map(Parameter::name).toList();
+        List<String> outs = List.copyOf(outcomes);
+        return of(parameters, outs, (p, o) -> {
+            Map<String, Double> in = new LinkedHashMap<>();
+            for (int j = 0; j < p.length; j++) {
+                in.put(names.get(j), p[j]);
+            }
+            Map<String, Double> r = model.apply(in);
+            for (int j = 0; j < o.length; j++) {
+                Double v = r == null ? null : r.get(outs.get(j));
+                o[j] = v == null ? Double.NaN : v;
+            }
+        });
+    }
+
     public ToleranceStudy withSamples(int n) {
         return new ToleranceStudy(parameters, outcomes, model, temperature, limits, n, seed, bins);
     }

@@ -25,9 +25,9 @@ import java.util.Locale;
 
 /**
  * Benchmark (not a test): bank search over a 300-part catalogue against the brute force, and a
- * 10,000-sample tolerance study. Run:
- * {@code mvn -q test-compile exec:java} is not configured; use
- * {@code java -cp target/classes:target/test-classes:$(deps) org.tankwright.bench.CapacitorBench}.
+ * 10,000-sample tolerance study. Times are thread CPU time (the build machine is shared). Run:
+ * {@code mvn -q test-compile dependency:build-classpath -Dmdep.outputFile=target/cp.txt && java -cp
+ * target/classes:target/test-classes:$(cat target/cp.txt) org.tankwright.bench.CapacitorBench}.
  */
 public final class CapacitorBench {
     public static void main(String[] args) {

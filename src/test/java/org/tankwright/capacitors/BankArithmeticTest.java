@@ -107,4 +107,51 @@ class BankArithmeticTest {
         assertEquals(b.currentRms() * share, b.main().currentRms(), 1e-9);
         assertFalse(b.warnings().stream().noneMatch(w -> w.contains("layout and ESL")));
     }
+
+    @Test
+    void bankFeedsTheToleranceStudy() {
+        CapacitorPart p = CapacitorPart.builder("c", 10e-9, Dielectric.C0G).tolerance(0.02).build();
+        CapacitorPart t = CapacitorPart.builder("t", 1e-9, Dielectric.C0G).tolerance(0.10).build();
+        BankLayout l = new BankLayout(p, 1, 2, t, TrimPosition.PARALLEL);
+        CapacitorBank b = evaluator(21e-9, 100, 0).evaluate(l);
+        // parallel: worst-case relative tolerance is the capacitance-weighted mean
+        assertEquals((20e-9 * 0.02 + 1e-9 * 0.10) / 21e-9, b.tolerance(), 1e-15);
+        var param = b.toleranceParameter("C1");
+        assertEquals(b.capacitance(), param.nominal(), 0);
+        assertEquals(b.tolerance(), param.spread().tolerance(), 0);
+        assertEquals(30e-6, param.tempcoSpreadPerK(), 1e-18, "C0G: 0 ± 30 ppm/K (EIA class-1 code)");
+    }
+
+    @Test
+    void eachLimitIsCheckedAndNamed() {
+        // common-practice derating 0.8 on a 1000 V DC rating: DC + AC peak ≤ 800 V
+        CapacitorPart p = CapacitorPart.builder("p", 10e-9, Dielectric.POLYPROPYLENE).tolerance(0).tanDelta(2e-4, 1e3)
+                .lossExponent(0).esl(5e-9).dcRating(1000).acRating(400.0).currentRating(5).dvdtRating(300e6)
+                .maxDissipation(1.0).build();
+        BankLayout one = BankLayout.of(p, 1, 1);
+        double f = 50e3;
+        BankEvaluator dcOk = new BankEvaluator(BankRequest.of(10e-9, 0.02, BankStress.sinusoidal(300, 0, 300, f)));
+        BankEvaluator dcHigh = new BankEvaluator(BankRequest.of(10e-9, 0.02, BankStress.sinusoidal(300, 0, 400, f)));
+        CapacitorBank ok = dcOk.evaluate(one);
+        assertEquals(300 + Math.sqrt(2) * ok.voltageRms(), ok.main().peakVoltage(), 1e-9, "AC and DC together");
+        assertTrue(ok.main().peakVoltage() <= 800);
+        assertTrue(ok.feasible(), ok.main().limitingCheck());
+        CapacitorBank high = dcHigh.evaluate(one);
+        assertFalse(high.feasible());
+        assertTrue(high.main().limitingCheck().contains("voltage"), high.main().limitingCheck());
+        // dV/dt of a sinusoid is 2πf·peak: 300 V rms at 50 kHz = 133 V/µs > 0.4 × 300 V/µs
+        BankEvaluator fast = new BankEvaluator(BankRequest.of(10e-9, 0.02, BankStress.sinusoidal(300, 0, 0, f))
+                .withDerating(new DeratingRules(1, 1, 1, 1, 0.4, 3, 0, false)));
+        CapacitorBank b = fast.evaluate(one);
+        assertEquals(2 * Math.PI * f * Math.sqrt(2) * b.voltageRms(), b.main().dvdt(), 1e-3);
+        assertEquals("dV/dt", b.main().limitingCheck());
+        // dissipation: I²·ESR against the part's limit (a lossy part, tan δ 1 %)
+        CapacitorPart lossy = CapacitorPart.builder("l", 10e-9, Dielectric.POLYESTER).tolerance(0).tanDelta(0.01, 50e3)
+                .esl(5e-9).dcRating(1000).acRating(400.0).currentRating(5).maxDissipation(0.1).build();
+        BankEvaluator hot = new BankEvaluator(BankRequest.of(10e-9, 0.02, BankStress.sinusoidal(100, 0, 0, f)));
+        CapacitorBank h = hot.evaluate(BankLayout.of(lossy, 1, 1));
+        assertEquals(h.main().currentRms() * h.main().currentRms() * lossy.esrAt(f), h.main().dissipation(), 1e-15);
+        assertEquals("dissipation", h.main().limitingCheck());
+        assertFalse(h.feasible());
+    }
 }

@@ -158,4 +158,16 @@ class ToleranceStudyTest {
         assertTrue(Double.isFinite(o.mean()) && o.max() <= 1.25);
         assertEquals(1 - r.invalidSamples() / 20_000.0, r.overallYield(), 1e-12);
     }
+
+    @Test
+    void namedModelMatchesTheArrayModel() {
+        ToleranceStudy named = ToleranceStudy.ofNamed(List.of(Parameter.uniform("L", L0, TL), Parameter.uniform("C", C0, TC)),
+                List.of("f0"), in -> Map.of("f0", 1 / (2 * Math.PI * Math.sqrt(in.get("L") * in.get("C")))))
+                .withSamples(2000).withSeed(42);
+        assertEquals(resonance(2000).run().outcome("f0").mean(), named.run().outcome("f0").mean(), 0, "same draws, same model");
+        StudyResult missing = ToleranceStudy.ofNamed(List.of(Parameter.uniform("x", 1, 0.1)), List.of("y"), in -> Map.of())
+                .withSamples(10).run();
+        assertEquals(10, missing.invalidSamples());
+        assertEquals(0, missing.overallYield(), 0);
+    }
 }
