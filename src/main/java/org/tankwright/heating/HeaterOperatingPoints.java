@@ -108,6 +108,9 @@ public final class HeaterOperatingPoints {
         list.add(higherIsWorse("coil current at the cold point's capacitor voltage", "A", iCold, iHot,
                 "a voltage-limited tank drives more current through a smaller reactance: coil, lead and capacitor"
                         + " current ratings"));
+        list.add(higherIsWorse("series-tank current per volt of bridge drive at resonance, 1/(R_work + R_coil)", "A/V",
+                1 / cold.load().totalResistance(), 1 / hot.load().totalResistance(),
+                "a series tank's current at a given bridge voltage: coil, capacitor and switch current ratings"));
         list.add(lowerIsWorse("coil efficiency", "", cold.load().efficiency(), hot.load().efficiency(),
                 "more of the input heats the coil and its coolant per watt into the work"));
         list.add(lowerIsWorse("power into the workpiece at the set coil current", "W", cold.load().workPower(),

@@ -1,5 +1,7 @@
 package org.tankwright.heating;
 
+import org.apache.commons.math3.analysis.UnivariateFunction;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.complex.Complex;
 import org.tankwright.units.Constants;
 
@@ -63,20 +65,15 @@ public final class WorkpieceLoad {
         double mu;
         int evaluations = 0;
         if (medium.fieldDependent()) {
-            // bisection on ln µ of h(µ) = ln µ − ln µr(√2·|H0(µ)|): h(1) ≤ 0, h(MU_MAX) > 0
-            double lo = 0.0;
-            double hi = Math.log(MU_MAX);
-            while (hi - lo > 1e-10) {
-                double mid = 0.5 * (lo + hi);
-                double target = medium.relativePermeability(SQRT2 * circuit.surfaceField(Math.exp(mid)));
-                evaluations++;
-                if (mid < Math.log(target)) {
-                    lo = mid;
-                } else {
-                    hi = mid;
-                }
-            }
-            mu = Math.exp(0.5 * (lo + hi));
+            // root of h(ln µ) = ln µ − ln µr(√2·|H0(µ)|) on [0, ln MU_MAX]: h(0) ≤ 0 < h(ln MU_MAX); Brent's method
+            int[] count = new int[1];
+            UnivariateFunction h = lnMu -> {
+                count[0]++;
+                return lnMu - Math.log(medium.relativePermeability(SQRT2 * circuit.surfaceField(Math.exp(lnMu))));
+            };
+            double lnMu = new BrentSolver(1e-12, 1e-10).solve(200, h, 0.0, Math.log(MU_MAX));
+            mu = Math.exp(lnMu);
+            evaluations = count[0];
         } else {
             mu = medium.relativePermeability(SQRT2 * circuit.surfaceField(1.0));
         }
