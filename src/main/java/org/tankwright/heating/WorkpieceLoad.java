@@ -4,6 +4,8 @@ import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.complex.Complex;
 import org.tankwright.units.Constants;
+import org.tankwright.units.Dimension;
+import org.tankwright.units.Quantities;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -99,13 +101,14 @@ public final class WorkpieceLoad {
             notes.add("coil shorter than its diameter: the fixed return-path approximation is rough here");
         }
         if (inside < bar.length()) {
-            notes.add("only the " + inside + " m of workpiece inside the coil is counted; the part outside is not heated"
-                    + " in this model");
+            notes.add("only the " + Quantities.format(inside, Dimension.LENGTH, 3) + " of workpiece inside the coil is"
+                    + " counted; the part outside is not heated in this model");
         }
         if (medium instanceof WorkpieceMedium.OfMaterial m && !m.material().temperatureInRange(m.temperatureC())) {
             valid = false;
-            notes.add("temperature " + m.temperatureC() + " °C lies outside " + m.material().name()
-                    + "'s table or above its upper limit " + m.material().upperLimitC() + " °C");
+            notes.add("temperature " + Quantities.format(m.temperatureC(), Dimension.TEMPERATURE, 4) + " lies outside "
+                    + m.material().name() + "'s table or above its upper limit "
+                    + Quantities.format(m.material().upperLimitC(), Dimension.TEMPERATURE, 4));
         }
         if (medium.fieldDependent()) {
             notes.add("µr from the material's B–H curve at the peak surface field; the saturated skin layer is"
