@@ -263,7 +263,8 @@ public final class WorkpieceCommand implements Callable<Integer> {
                 + " for diameter 4–8 δ (common practice); chosen "
                 + Quantities.format(advice.chosenFrequency(), Dimension.FREQUENCY, 3) + ": "
                 + advice.verdict().name().toLowerCase(java.util.Locale.ROOT).replace('_', ' '));
-        o.println("Model            " + r.provenance().model());
+        o.println("Model            " + r.provenance().model() + " ("
+                + (loaded == null ? r.provenance() : loaded.provenance()).verdict() + ")");
         for (String n : r.provenance().notes()) {
             o.println("  note: " + n);
         }

@@ -23,8 +23,11 @@ public record BarResponse(double frequency, double resistivity, double muR, doub
                           double powerPerLength, double reactivePowerPerLength, double thinSkinLimit,
                           double lowFrequencyLimit, Provenance provenance) {
 
-    /** Power over its thin-skin limit 2π·a·H0²·ρ/δ (tends to 1 for a ≫ δ). */
+    /**
+     * Power over its thin-skin limit 2π·a·H0²·ρ/δ (tends to 1 for a ≫ δ); equal to (a/δ)·(−Im F) since
+     * ω·µ·δ²/(2ρ) = 1, so it is defined at zero field too.
+     */
     public double thinSkinRatio() {
-        return powerPerLength / thinSkinLimit;
+        return -radiusOverDepth * fluxFactorIm;
     }
 }

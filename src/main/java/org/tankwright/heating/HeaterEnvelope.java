@@ -52,6 +52,19 @@ public record HeaterEnvelope(OperatingPoint cold, OperatingPoint hot, List<Worst
         return powerRatioAtSameCurrent() * v * v;
     }
 
+    /**
+     * P_hot/P_cold for a series tank driven at resonance by the same bridge voltage V: the tank current is
+     * V/(R_work + R_coil), so P = R_work·V²/(R_work + R_coil)².
+     */
+    public double powerRatioSeriesTankSameDrive() {
+        return seriesPowerPerVoltSquared(hot) / seriesPowerPerVoltSquared(cold);
+    }
+
+    private static double seriesPowerPerVoltSquared(OperatingPoint p) {
+        double r = p.load().totalResistance();
+        return p.load().workResistance() / (r * r);
+    }
+
     /** The lowest resonant frequency the driver must reach, Hz. */
     public double driverMinimumFrequency() {
         return Math.min(cold.resonantFrequency(), hot.resonantFrequency());

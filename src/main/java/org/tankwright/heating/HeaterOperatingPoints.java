@@ -48,17 +48,18 @@ public final class HeaterOperatingPoints {
         HeatingInputs.positive("tank capacitance", tankCapacitance, "F");
         WorkpieceMedium medium = new WorkpieceMedium.OfMaterial(material, temperatureC);
         double f = resonance(coil.emptyInductance(), tankCapacitance);
-        LoadedWorkCoil load = null;
-        for (int i = 0; i < MAX_ITERATIONS; i++) {
-            load = WorkpieceLoad.inCoil(coil, bar, medium, f, coilCurrent);
-            double next = resonance(load.loadedInductance(), tankCapacitance);
-            boolean done = Math.abs(next - f) <= 1e-10 * f;
+        boolean done = false;
+        for (int i = 0; i < MAX_ITERATIONS && !done; i++) {
+            double next = resonance(WorkpieceLoad.inCoil(coil, bar, medium, f, coilCurrent).loadedInductance(),
+                    tankCapacitance);
+            done = Math.abs(next - f) <= 1e-10 * f;
             f = next;
-            if (done) {
-                break;
-            }
         }
-        load = WorkpieceLoad.inCoil(coil, bar, medium, f, coilCurrent);
+        if (!done) {
+            throw new IllegalStateException("the " + label + " point's resonance f = 1/(2π√(L(f)·C)) did not settle in "
+                    + MAX_ITERATIONS + " steps (last " + f + " Hz): the load changes the inductance too strongly");
+        }
+        LoadedWorkCoil load = WorkpieceLoad.inCoil(coil, bar, medium, f, coilCurrent);
         return new OperatingPoint(label, temperatureC, material.magneticAt(temperatureC), tankCapacitance, load);
     }
 
@@ -108,6 +109,9 @@ public final class HeaterOperatingPoints {
         list.add(higherIsWorse("coil current at the cold point's capacitor voltage", "A", iCold, iHot,
                 "a voltage-limited tank drives more current through a smaller reactance: coil, lead and capacitor"
                         + " current ratings"));
+        list.add(higherIsWorse("series-tank current per volt of bridge drive at resonance, 1/(R_work + R_coil)", "A/V",
+                1 / cold.load().totalResistance(), 1 / hot.load().totalResistance(),
+                "a series tank's current at a given bridge voltage: coil, capacitor and switch current ratings"));
         list.add(lowerIsWorse("coil efficiency", "", cold.load().efficiency(), hot.load().efficiency(),
                 "more of the input heats the coil and its coolant per watt into the work"));
         list.add(lowerIsWorse("power into the workpiece at the set coil current", "W", cold.load().workPower(),

@@ -23,6 +23,11 @@ public record OperatingPoint(String label, double temperatureC, boolean magnetic
         return load.coilVoltage();
     }
 
+    /** Capacitor current of the parallel tank, V·ω·C, A rms (≈ the coil current when Q is high). */
+    public double capacitorCurrent() {
+        return capacitorVoltage() * 2 * Math.PI * resonantFrequency() * tankCapacitance;
+    }
+
     /** Reactive power the capacitor handles, V·I, var. */
     public double tankReactivePower() {
         return load.coilVoltage() * load.coilCurrent();

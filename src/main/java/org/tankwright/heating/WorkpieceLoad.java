@@ -1,7 +1,11 @@
 package org.tankwright.heating;
 
+import org.apache.commons.math3.analysis.UnivariateFunction;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.complex.Complex;
 import org.tankwright.units.Constants;
+import org.tankwright.units.Dimension;
+import org.tankwright.units.Quantities;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -63,20 +67,15 @@ public final class WorkpieceLoad {
         double mu;
         int evaluations = 0;
         if (medium.fieldDependent()) {
-            // bisection on ln µ of h(µ) = ln µ − ln µr(√2·|H0(µ)|): h(1) ≤ 0, h(MU_MAX) > 0
-            double lo = 0.0;
-            double hi = Math.log(MU_MAX);
-            while (hi - lo > 1e-10) {
-                double mid = 0.5 * (lo + hi);
-                double target = medium.relativePermeability(SQRT2 * circuit.surfaceField(Math.exp(mid)));
-                evaluations++;
-                if (mid < Math.log(target)) {
-                    lo = mid;
-                } else {
-                    hi = mid;
-                }
-            }
-            mu = Math.exp(0.5 * (lo + hi));
+            // root of h(ln µ) = ln µ − ln µr(√2·|H0(µ)|) on [0, ln MU_MAX]: h(0) ≤ 0 < h(ln MU_MAX); Brent's method
+            int[] count = new int[1];
+            UnivariateFunction h = lnMu -> {
+                count[0]++;
+                return lnMu - Math.log(medium.relativePermeability(SQRT2 * circuit.surfaceField(Math.exp(lnMu))));
+            };
+            double lnMu = new BrentSolver(1e-12, 1e-10).solve(200, h, 0.0, Math.log(MU_MAX));
+            mu = Math.exp(lnMu);
+            evaluations = count[0];
         } else {
             mu = medium.relativePermeability(SQRT2 * circuit.surfaceField(1.0));
         }
@@ -102,13 +101,14 @@ public final class WorkpieceLoad {
             notes.add("coil shorter than its diameter: the fixed return-path approximation is rough here");
         }
         if (inside < bar.length()) {
-            notes.add("only the " + inside + " m of workpiece inside the coil is counted; the part outside is not heated"
-                    + " in this model");
+            notes.add("only the " + Quantities.format(inside, Dimension.LENGTH, 3) + " of workpiece inside the coil is"
+                    + " counted; the part outside is not heated in this model");
         }
         if (medium instanceof WorkpieceMedium.OfMaterial m && !m.material().temperatureInRange(m.temperatureC())) {
             valid = false;
-            notes.add("temperature " + m.temperatureC() + " °C lies outside " + m.material().name()
-                    + "'s table or above its upper limit " + m.material().upperLimitC() + " °C");
+            notes.add("temperature " + Quantities.format(m.temperatureC(), Dimension.TEMPERATURE, 4) + " lies outside "
+                    + m.material().name() + "'s table or above its upper limit "
+                    + Quantities.format(m.material().upperLimitC(), Dimension.TEMPERATURE, 4));
         }
         if (medium.fieldDependent()) {
             notes.add("µr from the material's B–H curve at the peak surface field; the saturated skin layer is"

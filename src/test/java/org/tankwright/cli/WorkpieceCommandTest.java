@@ -112,4 +112,24 @@ class WorkpieceCommandTest {
         assertTrue(out[1].contains("relative permeability 0.5"), out[1]);
         assertFalse(out[1].contains("Exception"), out[1]);
     }
+
+    @Test
+    void boreMakesATube() {
+        // low frequency: P' ∝ a⁴ − c⁴ for µr = 1 (derived closed form, docs/models.md)
+        JsonObject solid = json("workpiece", "--diameter", "20mm", "--resistivity", "1e-6", "--mu-r", "1",
+                "--frequency", "50", "--field", "1e4", "--json");
+        JsonObject tube = json("workpiece", "--diameter", "20mm", "--bore", "10mm", "--resistivity", "1e-6", "--mu-r",
+                "1", "--frequency", "50", "--field", "1e4", "--json");
+        double ratio = tube.get("power_per_length_W_per_m").getAsDouble()
+                / solid.get("power_per_length_W_per_m").getAsDouble();
+        assertEquals(1 - Math.pow(0.5, 4), ratio, 1e-4);
+        // a wall many δ thick carries the same current as the solid bar
+        JsonObject thickSolid = json("workpiece", "--diameter", "20mm", "--resistivity", "1e-6", "--mu-r", "1",
+                "--frequency", "10meg", "--field", "1e4", "--json");
+        JsonObject thickTube = json("workpiece", "--diameter", "20mm", "--bore", "10mm", "--resistivity", "1e-6",
+                "--mu-r", "1", "--frequency", "10meg", "--field", "1e4", "--json");
+        assertEquals(thickSolid.get("power_per_length_W_per_m").getAsDouble(),
+                thickTube.get("power_per_length_W_per_m").getAsDouble(), 1e-9 * thickSolid.get(
+                        "power_per_length_W_per_m").getAsDouble());
+    }
 }

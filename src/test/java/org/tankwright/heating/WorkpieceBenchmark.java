@@ -17,7 +17,7 @@ public final class WorkpieceBenchmark {
         BarGeometry bar = BarGeometry.solid(0.02, 0.06);
         WorkpieceMedium cold = new WorkpieceMedium.OfMaterial(steel, 20);
         double sink = 0;
-        for (int round = 0; round < 3; round++) {
+        for (int round = 0; round < 8; round++) {
             long t0 = System.nanoTime();
             int n = 2000;
             for (int i = 0; i < n; i++) {
@@ -33,8 +33,14 @@ public final class WorkpieceBenchmark {
                 sink += HeaterOperatingPoints.solve(coil, bar, steel, 20, 850, 1e-5, 250 + i).frequencyShift();
             }
             long t3 = System.nanoTime();
-            System.out.printf("tube bar solution %.1f µs, bar in coil with µr iteration %.1f µs, cold+hot points %.2f ms%n",
-                    (t1 - t0) / 1e3 / n, (t2 - t1) / 1e3 / n, (t3 - t2) / 1e6 / m);
+            for (int i = 0; i < m; i++) {
+                sink += HeaterStudy.run(coil, bar, steel, 20, 850, 1e-5, 250 + i, new LossAllowance.Fraction(0.25), 10)
+                        .heatingTime().timeSeconds();
+            }
+            long t4 = System.nanoTime();
+            System.out.printf("tube bar solution %.1f µs, bar in coil with µr iteration %.1f µs, cold+hot points %.2f ms,"
+                            + " whole heater study %.2f ms%n",
+                    (t1 - t0) / 1e3 / n, (t2 - t1) / 1e3 / n, (t3 - t2) / 1e6 / m, (t4 - t3) / 1e6 / m);
         }
         System.out.println("(checksum " + sink + ")");
     }

@@ -63,6 +63,10 @@ class WorkpieceOperatingPointsTest {
             for (OperatingPoint p : new OperatingPoint[] {e.cold(), e.hot()}) {
                 double f = 1 / (2 * Math.PI * Math.sqrt(p.load().loadedInductance() * p.tankCapacitance()));
                 assertEquals(f, p.resonantFrequency(), 1e-8 * f);
+                // parallel tank: I_C = V·ωC = I·|R + jωL|·ωC = I·√(1 + 1/Q²) at ω = 1/√(LC)
+                double q = p.load().qualityFactor();
+                assertEquals(p.load().coilCurrent() * Math.sqrt(1 + 1 / (q * q)), p.capacitorCurrent(),
+                        1e-6 * p.capacitorCurrent());
             }
             assertEquals(e.cold().resonantFrequency(), e.driverMinimumFrequency());
             assertEquals(e.hot().resonantFrequency(), e.driverMaximumFrequency());

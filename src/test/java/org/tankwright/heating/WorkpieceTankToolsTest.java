@@ -122,4 +122,25 @@ class WorkpieceTankToolsTest {
         assertEquals(FrequencyAdvice.Verdict.BELOW_BAND, FrequencyAdvice.forBar(0.02, rho, 1, 3e3).verdict());
         assertEquals(FrequencyAdvice.Verdict.ABOVE_BAND, FrequencyAdvice.forBar(0.02, rho, 1, 300e3).verdict());
     }
+
+    @Test
+    void heaterStudyGathersThePiecesConsistently() {
+        WorkCoil coil = WorkCoil.withNagaokaInductance(8, 0.088, 0.062, 0.010);
+        BarGeometry bar = BarGeometry.solid(0.025, 0.150);
+        double c = 1 / (Math.pow(2 * Math.PI * 25e3, 2) * coil.emptyInductance());
+        HeaterStudy s = HeaterStudy.run(coil, bar, STEEL, 20, 1100, c, 400, new LossAllowance.Fraction(0.3), 10);
+        assertEquals(Math.PI * 0.0125 * 0.0125 * 0.15 * 7850, s.workpieceMass(), 1e-9);
+        assertEquals(0.010 * 400 * 400, s.coolant().heatLoad(), 1e-9, "coil loss R_coil·I²");
+        assertTrue(s.heatingTime().reachable());
+        // the hot band lies far above the cold one: µr drops to 1 and ρ rises (δ ∝ √(ρ/µr))
+        assertTrue(s.hotAdvice().lowFrequency() > 20 * s.coldAdvice().lowFrequency());
+        assertEquals(s.envelope().hot().resonantFrequency(), s.hotAdvice().chosenFrequency());
+        // series tank at the same bridge voltage: P ∝ R_work/(R_work + R_coil)²
+        double ratio = s.envelope().powerRatioSeriesTankSameDrive();
+        LoadedWorkCoil h = s.envelope().hot().load();
+        LoadedWorkCoil k = s.envelope().cold().load();
+        double expected = h.workResistance() / Math.pow(h.totalResistance(), 2)
+                / (k.workResistance() / Math.pow(k.totalResistance(), 2));
+        assertEquals(expected, ratio, 1e-12);
+    }
 }
