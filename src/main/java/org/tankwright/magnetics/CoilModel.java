@@ -13,6 +13,8 @@ import org.tankwright.units.Constants;
  * so sweeps and keystroke recomputes reuse one model.
  */
 public final class CoilModel {
+    /** Current density above which a caution is shown, A/m² (common practice for air-cooled windings). */
+    private static final double HOT_CURRENT_DENSITY = 6e6;
     /** Largest number of rings the capacitance solve uses; larger windings are grouped. */
     private static final int MAX_CAPACITANCE_RINGS = 300;
 
@@ -176,7 +178,7 @@ public final class CoilModel {
         double lf = inductanceAt(f, t);
         double srf = selfResonance();
         double area = c.metalArea();
-        List<String> warnings = warnings(f, srf, delta);
+        List<String> warnings = warnings(f, srf, delta, op.current() / (area * rdc / rs));
         return new CoilResult(geometry.kind(), inductance(), chosen.name(), models, spread, lf,
                 apparentInductance(f, t), rdc, rs + rp, rs, rp, resistanceModelText(c), delta,
                 2 * Math.PI * f * lf / (rs + rp), selfCapacitance, srf, SelfCapacitance.DESCRIPTION, srf / f,
@@ -186,24 +188,36 @@ public final class CoilModel {
 
     /** Q curve on 41 log-spaced points from f/10 to 10 f, stopping below 0.9 f_SR. */
     public List<CoilResult.QPoint> qCurve(double frequency, double temperature, double srf) {
-        List<CoilResult.QPoint> out = new ArrayList<>();
         double lo = frequency / 10;
         double hi = Math.min(10 * frequency, 0.9 * srf);
         if (hi <= lo) {
-            return out;
+            return List.of();
         }
         int n = 41;
+        CoilResult.QPoint[] points = new CoilResult.QPoint[n];
+        Conductor c = geometry.conductor();
+        double rho = c.material().resistivity(temperature);
+        double rdc = resistanceDc(temperature);
+        double h2 = fieldSum + WireLoss.internalFieldSquared(c) * wireLength;
         for (int i = 0; i < n; i++) {
             double f = lo * Math.pow(hi / lo, i / (double) (n - 1));
-            double rac = resistanceAc(f, temperature);
-            out.add(new CoilResult.QPoint(f, rac, 2 * Math.PI * f * inductanceAt(f, temperature) / rac,
-                    apparentInductance(f, temperature)));
+            double delta = WireLoss.skinDepth(rho, f);
+            double rac = rdc * WireLoss.skinRatio(c, delta) + WireLoss.proximityCoefficient(c, rho, delta) * h2;
+            double lf = inductanceAt(f, temperature);
+            double r = f / srf;
+            points[i] = new CoilResult.QPoint(f, rac, 2 * Math.PI * f * lf / rac, lf / (1 - r * r));
         }
-        return List.copyOf(out);
+        return List.of(points);
     }
 
-    private List<String> warnings(double f, double srf, double delta) {
+    private List<String> warnings(double f, double srf, double delta, double currentDensityAc) {
         List<String> w = new ArrayList<>();
+        if (currentDensityAc > HOT_CURRENT_DENSITY) {
+            w.add(String.format(Locale.ROOT, "rms current density %.3g A/mm² (skin-weighted) exceeds %.0f A/mm², a common-"
+                    + "practice limit for air-cooled windings (PCB traces and water-cooled tube follow their own rules): "
+                    + "check the temperature rise; hot conductors burn and insulation fails, defer to local codes and "
+                    + "licensed practice", currentDensityAc * 1e-6, HOT_CURRENT_DENSITY * 1e-6));
+        }
         if (f >= srf) {
             w.add(String.format(Locale.ROOT, "operating frequency is at or above the estimated self-resonance "
                     + "(%.3g Hz): the coil behaves as a capacitor; redesign (fewer turns, more spacing)", srf));

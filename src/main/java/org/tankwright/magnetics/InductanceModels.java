@@ -2,7 +2,6 @@ package org.tankwright.magnetics;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import org.tankwright.materials.Conductor;
 import org.tankwright.units.Constants;
 
@@ -122,7 +121,9 @@ final class InductanceModels {
                 + "1974; Grover 1946)";
     }
 
+    /** Two decimals (three significant digits below 1), cheaply: notes are built on every recompute. */
     private static String fmt(double v) {
-        return String.format(Locale.ROOT, "%.3g", v);
+        double scale = Math.abs(v) < 1 ? 1000.0 : 100.0;
+        return String.valueOf(Math.round(v * scale) / scale);
     }
 }
