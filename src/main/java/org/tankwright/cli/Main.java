@@ -18,6 +18,7 @@ import picocli.CommandLine.Command;
                 RetuneCommand.class,
                 CoupleCommand.class,
                 FieldCommand.class,
+                CoilCommand.class,
         })
 public final class Main implements Runnable {
 
