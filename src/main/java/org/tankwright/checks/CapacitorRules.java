@@ -218,7 +218,7 @@ final class CapacitorRules {
                 ? "The self-resonant frequency of " + who + " (" + q(srf, Dimension.FREQUENCY) + ") is at or below the "
                 + "operating frequency (" + q(f, Dimension.FREQUENCY) + "): it behaves as the opposite reactance there."
                 : "The self-resonant frequency of " + who + " (" + q(srf, Dimension.FREQUENCY) + ") is only "
-                + org.tankwright.units.Quantities.number(srf / f, 2) + " × the operating frequency; its apparent value is "
+                + Read.num(srf / f, 2) + " × the operating frequency; its apparent value is "
                 + pct(1 / (1 - (f / srf) * (f / srf)) - 1) + " off the nominal.";
         rule.add(out, Severity.NOTICE, srf, Limits.SRF_RATIO * f, "Hz", element, m,
                 "Keep the operating frequency below a fifth of the self-resonance (common practice): "

@@ -95,7 +95,7 @@ final class CoilRules {
         }
 
         private static String num(double x) {
-            return org.tankwright.units.Quantities.number(x, 3);
+            return Read.num(x, 3);
         }
     }
 

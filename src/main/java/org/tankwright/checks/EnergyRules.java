@@ -60,7 +60,7 @@ final class EnergyRules {
                 double c = b.capacitance() * v;
                 if (finite(c) && v > Limits.elvAcPeak() && c >= Limits.HAZARDOUS_CHARGE) {
                     add(out, Severity.WARNING, c, Limits.HAZARDOUS_CHARGE, "C", b.id(),
-                            b.id() + " can hold " + org.tankwright.units.Quantities.number(c * 1e6, 3) + " µC at "
+                            b.id() + " can hold " + Read.num(c * 1e6, 3) + " µC at "
                                     + q(v, Dimension.VOLTAGE) + " peak if switched off at the wrong instant: a discharge "
                                     + "through the body at this charge can be dangerous.",
                             DISCHARGE);
@@ -88,7 +88,7 @@ final class EnergyRules {
             add(out, Severity.CAUTION, v, Limits.ELV_DC, "V", "$.source.vdc_V",
                     "The DC link holds " + q(v, Dimension.VOLTAGE) + " after switch-off until it is discharged: "
                             + q(perHundredMicro, Dimension.ENERGY) + " per 100 µF of link capacitance; "
-                            + org.tankwright.units.Quantities.number(cHazard * 1e6, 3) + " µF or more holds "
+                            + Read.num(cHazard * 1e6, 3) + " µF or more holds "
                             + q(Limits.HAZARDOUS_ENERGY, Dimension.ENERGY) + ".",
                     DISCHARGE);
         }

@@ -87,7 +87,7 @@ final class HeaterRules {
                 double flow = h.coolantFlow();
                 add(out, Severity.CAUTION, flow, Double.NaN, "m³/s", "$.workpiece.coolant_rise_degC",
                         "The work coil dissipates up to " + q(loss, Dimension.POWER) + ": it needs a coolant flow of at "
-                                + "least " + (finite(flow) ? org.tankwright.units.Quantities.number(flow * 6e4, 3)
+                                + "least " + (finite(flow) ? Read.num(flow * 6e4, 3)
                                 + " L/min" : "the computed value") + (finite(rise) ? " of water for a " + q(rise,
                                 Dimension.TEMPERATURE) + " rise" : "") + ". Without flow the tube overheats within "
                                 + "seconds and can burst with steam.",

@@ -30,7 +30,7 @@ final class NetworkRules {
                 return;
             }
             add(out, Severity.NOTICE, n.loadedQ(), Limits.FHA_MIN_Q, "", "$.compensation",
-                    "The loaded Q of the driven tank is " + org.tankwright.units.Quantities.number(n.loadedQ(), 2)
+                    "The loaded Q of the driven tank is " + Read.num(n.loadedQ(), 2)
                             + ": the current is no longer close to a sine, so every voltage, current and loss computed "
                             + "from the fundamental may be off, and harmonics are larger than it shows.",
                     "Raise the loaded Q (more inductance or a lighter load), or verify the stresses in a time-domain "
@@ -106,7 +106,7 @@ final class NetworkRules {
             }
             add(out, Severity.WARNING, e.removedReceiverCurrent(), covered, "A", "$.envelope.receiver_removable",
                     "With the receiver removed the primary current rises to " + q(e.removedReceiverCurrent(), Dimension.CURRENT)
-                            + " (" + org.tankwright.units.Quantities.number(e.removedReceiverCurrent() / covered, 2)
+                            + " (" + Read.num(e.removedReceiverCurrent() / covered, 2)
                             + " × the worst current of the envelope, " + q(covered, Dimension.CURRENT) + "); the primary "
                             + "capacitor voltage and the field rise with it.",
                     "Detect the receiver (or its absence) and stop or throttle the bridge, and trip on primary current"

@@ -135,6 +135,11 @@ final class Read {
         return Quantities.format(v, d, 3);
     }
 
+    /** A plain number to {@code sig} significant digits. */
+    static String num(double x, int sig) {
+        return Quantities.number(x, sig);
+    }
+
     /** A fraction as a percentage ({@code "12 %"}). */
     static String pct(double fraction) {
         return Quantities.format(fraction, Dimension.FRACTION, 2);

@@ -12,6 +12,7 @@ import picocli.CommandLine.Command;
                 CommandLine.HelpCommand.class,
                 OpenCommand.class,
                 ValidateCommand.class,
+                CheckCommand.class,
         })
 public final class Main implements Runnable {
 
