@@ -69,6 +69,15 @@ public final class Checks {
         return List.copyOf(out);
     }
 
+    /**
+     * A copy of {@code r} with its findings filled in by {@link #run}: the pipeline's last step
+     * ({@code return Checks.attach(result);} at the end of {@code Analysis.run}).
+     */
+    public static AnalysisResult attach(AnalysisResult r) {
+        return new AnalysisResult(r.design(), r.coils(), r.coupling(), r.network(), r.stresses(), r.envelope(),
+                r.banks(), r.heater(), r.exposure(), run(r), r.notes(), r.computeNanos());
+    }
+
     /** Whether any finding is a danger (the command line exits with status 5). */
     public static boolean anyDanger(List<Finding> findings) {
         return findings.stream().anyMatch(f -> f.severity() == Severity.DANGER);

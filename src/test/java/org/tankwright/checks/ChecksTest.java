@@ -72,6 +72,14 @@ class ChecksTest {
     }
 
     @Test
+    void attachFillsTheResultsFindings() {
+        AnalysisResult r = ResultFixtures.ssLink();
+        AnalysisResult withFindings = Checks.attach(r);
+        assertEquals(Checks.run(r), withFindings.findings());
+        assertEquals(r.network(), withFindings.network());
+    }
+
+    @Test
     void cautionsEndWithTheDeferral() {
         List<String> c = Checks.cautions();
         assertTrue(c.size() >= 6);
