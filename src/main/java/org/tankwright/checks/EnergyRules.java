@@ -2,7 +2,6 @@ package org.tankwright.checks;
 
 import org.tankwright.analysis.AnalysisResult;
 import org.tankwright.analysis.BankReport;
-import org.tankwright.analysis.NetworkReport;
 import org.tankwright.units.Dimension;
 
 import java.util.List;
@@ -78,11 +77,10 @@ final class EnergyRules {
 
         @Override
         public void check(AnalysisResult r, List<Finding> out) {
-            NetworkReport n = r.network();
-            if (n == null || !finite(n.busVoltage()) || n.busVoltage() <= Limits.ELV_DC) {
+            double v = Read.busVoltage(r);
+            if (!finite(v) || v <= Limits.ELV_DC) {
                 return;
             }
-            double v = n.busVoltage();
             double perHundredMicro = 0.5 * 100e-6 * v * v;
             double cHazard = 2 * Limits.HAZARDOUS_ENERGY / (v * v);
             add(out, Severity.CAUTION, v, Limits.ELV_DC, "V", "$.source.vdc_V",

@@ -63,8 +63,30 @@ final class Read {
 
     /** Where the worst point of a stress lies, for messages ("at the operating point" or "at ..."). */
     static String where(ElementStress s, boolean envelopeWorse) {
-        return envelopeWorse && s != null && s.worstAt() != null && !s.worstAt().isEmpty()
-                ? "at the worst envelope point (" + s.worstAt() + ")" : "at the operating point";
+        if (!envelopeWorse) {
+            return "at the operating point";
+        }
+        return s != null && s.worstAt() != null && !s.worstAt().isEmpty()
+                ? "at the worst envelope point (" + s.worstAt() + ")" : "at the worst operating point";
+    }
+
+    /** The DC bus voltage: the network's, else the design's {@code source.vdc_V}; NaN when neither is known. */
+    static double busVoltage(AnalysisResult r) {
+        if (r.network() != null && finite(r.network().busVoltage())) {
+            return r.network().busVoltage();
+        }
+        Design d = r.design();
+        return d != null && d.source() != null && d.source().vdc() != null ? d.source().vdc() : Double.NaN;
+    }
+
+    /** A heater's tank peak voltage over its cold and hot points (√2 × the larger rms), NaN without a heater. */
+    static double heaterTankPeak(AnalysisResult r) {
+        if (r.heater() == null) {
+            return Double.NaN;
+        }
+        double cold = r.heater().cold() == null ? Double.NaN : r.heater().cold().capacitorVoltage();
+        double hot = r.heater().hot() == null ? Double.NaN : r.heater().hot().capacitorVoltage();
+        return Math.sqrt(2) * max(cold, hot);
     }
 
     static boolean finite(double x) {

@@ -37,11 +37,11 @@ final class VoltageRules {
                             || ("RL".equals(s.id()) && Read.dcOutput(d))) {
                         continue; // the bus and a DC output are judged as d.c. below
                     }
-                    ac(out, s);
+                    ac(out, s, r);
                 }
             }
+            dc(out, Read.busVoltage(r), "$.source.vdc_V", "the DC bus");
             if (r.network() != null) {
-                dc(out, r.network().busVoltage(), "$.source.vdc_V", "the DC bus");
                 if (Read.dcOutput(d)) {
                     dc(out, r.network().outputVoltage(), "RL", "the DC output");
                 }
@@ -57,13 +57,13 @@ final class VoltageRules {
             }
         }
 
-        private void ac(List<Finding> out, ElementStress s) {
-            double v = Read.peakVoltage(s);
+        private void ac(List<Finding> out, ElementStress s, AnalysisResult r) {
+            double v = Read.max(Read.peakVoltage(s), ("C1".equals(s.id()) || "L1".equals(s.id())) ? Read.heaterTankPeak(r) : Double.NaN);
             if (!finite(v) || v <= Limits.elvAcPeak()) {
                 return;
             }
             boolean high = v > Limits.lvAcPeak();
-            boolean envelope = finite(s.worstVoltagePeak()) && s.worstVoltagePeak() > s.voltagePeak();
+            boolean envelope = v > s.voltagePeak();
             add(out, high ? Severity.DANGER : Severity.WARNING, v, high ? Limits.lvAcPeak() : Limits.elvAcPeak(), "V",
                     s.id(), s.id() + " (" + s.role() + ") reaches " + q(v, VOLTAGE) + " peak "
                             + Read.where(s, envelope) + ", above extra-low voltage (" + q(Limits.ELV_AC_RMS, VOLTAGE)
@@ -101,7 +101,7 @@ final class VoltageRules {
             if (s == null) {
                 return;
             }
-            double bus = r.network() == null ? Double.NaN : r.network().busVoltage();
+            double bus = Read.busVoltage(r);
             if (Boolean.TRUE.equals(s.mainsDerived()) && !Boolean.TRUE.equals(s.isolated())) {
                 String side = d.isLink()
                         ? "Every node of the primary side (bridge, capacitor, pad coil, its ferrite and any metal touching them)"

@@ -45,6 +45,16 @@ class VoltageRulesTest {
     }
 
     @Test
+    void heaterHotPointCountsWhenItsStressRowIsLower() {
+        // The heater's hot-point tank voltage is held to IEC 61140 even if the stress row shows less.
+        AnalysisResult r = ResultFixtures.heater();
+        AnalysisResult low = ResultFixtures.withStresses(r, r.stresses().stream().map(s -> new org.tankwright.analysis.ElementStress(
+                s.id(), s.role(), 10, 14.1, s.currentRms(), s.currentPeak(), s.loss(), Double.NaN, Double.NaN, "",
+                Double.NaN, Double.NaN)).toList());
+        assertEquals(Math.PI * 48, fires(low, "TW-V01", "C1", Severity.WARNING).value(), 1e-6);
+    }
+
+    @Test
     void smallTankStaysQuiet() {
         // 1.5 V rms × loaded Q 25 = 37.7 V rms: inside IEC 61140 extra-low voltage.
         quiet(ResultFixtures.measuredTank(), "TW-V01");
