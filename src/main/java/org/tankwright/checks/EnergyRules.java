@@ -46,22 +46,50 @@ final class EnergyRules {
         }
     }
 
-    /** TW-E02: charge C·V of a bank above extra-low voltage, enough for a dangerous discharge shock. */
+    /**
+     * TW-E02: a bank's discharge against the limits for a part not to count as live: capacitance
+     * up to 450 V peak, charge up to 15 kV, energy above.
+     */
     static final class BankCharge extends BaseRule {
         BankCharge() {
-            super("TW-E02", "charge of a capacitor bank", "IEC 61010-1 §6.3 (45 µC; from memory)");
+            super("TW-E02", "discharge of a capacitor bank", Limits.DISCHARGE_SOURCE);
         }
 
         @Override
         public void check(AnalysisResult r, List<Finding> out) {
             for (BankReport b : CapacitorRules.banks(r)) {
                 double v = bankPeak(r, b);
-                double c = b.capacitance() * v;
-                if (finite(c) && v > Limits.elvAcPeak() && c >= Limits.HAZARDOUS_CHARGE) {
-                    add(out, Severity.WARNING, c, Limits.HAZARDOUS_CHARGE, "C", b.id(),
-                            b.id() + " can hold " + Read.num(c * 1e6, 3) + " µC at "
-                                    + q(v, Dimension.VOLTAGE) + " peak if switched off at the wrong instant: a discharge "
-                                    + "through the body at this charge can be dangerous.",
+                double c = b.capacitance();
+                if (!finite(v) || !finite(c) || v <= Limits.DISCHARGE_FROM_PEAK) {
+                    continue;
+                }
+                double value;
+                double limit;
+                String unit;
+                String what;
+                if (v <= Limits.DISCHARGE_CAPACITANCE_UPTO) {
+                    value = c;
+                    limit = Limits.DISCHARGE_CAPACITANCE;
+                    unit = "F";
+                    what = q(c, Dimension.CAPACITANCE) + " charged to " + q(v, Dimension.VOLTAGE) + " peak (above "
+                            + q(limit, Dimension.CAPACITANCE) + " at this voltage)";
+                } else if (v <= Limits.DISCHARGE_CHARGE_UPTO) {
+                    value = c * v;
+                    limit = Limits.DISCHARGE_CHARGE;
+                    unit = "C";
+                    what = Read.num(value * 1e6, 3) + " µC at " + q(v, Dimension.VOLTAGE) + " peak (above "
+                            + Read.num(limit * 1e6, 3) + " µC at this voltage)";
+                } else {
+                    value = 0.5 * c * v * v;
+                    limit = Limits.DISCHARGE_ENERGY;
+                    unit = "J";
+                    what = q(value, Dimension.ENERGY) + " at " + q(v, Dimension.VOLTAGE) + " peak (above "
+                            + q(limit, Dimension.ENERGY) + ")";
+                }
+                if (value > limit) {
+                    add(out, Severity.WARNING, value, limit, unit, b.id(),
+                            b.id() + " can be left holding " + what + " if switched off at the wrong instant: its "
+                                    + "discharge through the body is a shock hazard.",
                             DISCHARGE);
                 }
             }

@@ -68,10 +68,26 @@ public final class Limits {
 
     // ---------------------------------------------------------------- energy and charge
 
-    /** Stored energy treated as a hazardous energy level (IEC 60950-1 §1.2.8.10: 20 J at 2 V or more; from memory). */
+    /** Stored energy treated as a hazardous energy level (IEC 60950-1 §1.2.8.10: 20 J at 2 V or more; from memory, its 240 VA twin cross-checked). */
     public static final double HAZARDOUS_ENERGY = 20.0;
-    /** Charge of a capacitor discharge treated as a shock hazard, C (IEC 61010-1 §6.3, 45 µC up to 15 kV; from memory). */
-    public static final double HAZARDOUS_CHARGE = 45e-6;
+    /**
+     * Discharge limits for a part not to count as live (IEC 60335-1 §8.1.4; cross-checked against a
+     * quotation of the clause): above 42.4 V peak up to 450 V, at most 0.1 µF; above 450 V up to
+     * 15 kV, at most 45 µC; above 15 kV, at most 350 mJ.
+     */
+    public static final double DISCHARGE_FROM_PEAK = 42.4;
+    /** Upper end of the capacitance band of IEC 60335-1 §8.1.4, V peak. */
+    public static final double DISCHARGE_CAPACITANCE_UPTO = 450;
+    /** Largest capacitance between 42.4 V and 450 V peak, F. */
+    public static final double DISCHARGE_CAPACITANCE = 0.1e-6;
+    /** Upper end of the charge band, V peak. */
+    public static final double DISCHARGE_CHARGE_UPTO = 15e3;
+    /** Largest charge between 450 V and 15 kV peak, C. */
+    public static final double DISCHARGE_CHARGE = 45e-6;
+    /** Largest discharge energy above 15 kV peak, J. */
+    public static final double DISCHARGE_ENERGY = 0.35;
+    /** The source of the discharge limits. */
+    public static final String DISCHARGE_SOURCE = "IEC 60335-1 §8.1.4 discharge limits (0.1 µF to 450 V, 45 µC to 15 kV, 350 mJ above)";
 
     // ---------------------------------------------------------------- heat
 

@@ -28,19 +28,31 @@ class EnergyRulesTest {
     }
 
     @Test
-    void chargeAboveFortyFiveMicrocoulombsIsAWarning() {
-        // Q = C·V = 1 µF · 151 V = 151 µC ≥ 45 µC (IEC 61010-1 §6.3).
+    void capacitanceAboveATenthOfAMicrofaradUpTo450VoltsIsAWarning() {
+        // IEC 60335-1 §8.1.4: between 42.4 V and 450 V peak at most 0.1 µF; the heater's 1 µF sits at 151 V peak.
         Finding f = fires(ResultFixtures.heater(), "TW-E02", "C1", Severity.WARNING);
-        assertEquals(1e-6 * Math.PI * 48, f.value(), 1e-9);
-        assertEquals(45e-6, f.limit());
+        assertEquals(1e-6, f.value(), 1e-12);
+        assertEquals(0.1e-6, f.limit(), 1e-15);
+        assertEquals("F", f.unit());
     }
 
     @Test
-    void chargeAtExtraLowVoltageIsQuiet() {
+    void chargeAboveFortyFiveMicrocoulombsIsAWarning() {
+        // IEC 60335-1 §8.1.4: between 450 V and 15 kV peak at most 45 µC; C1 of the pad: 12 nF at 4.9 kV worst.
+        AnalysisResult r = ResultFixtures.ssLink();
+        Finding f = fires(r, "TW-E02", "C1", Severity.WARNING);
+        assertEquals(45e-6, f.limit(), 1e-15);
+        assertEquals(r.banks().get(0).capacitance() * EnergyRules.bankPeak(r, r.banks().get(0)), f.value(), 1e-12);
+    }
+
+    @Test
+    void smallDischargeIsQuiet() {
         ResultFixtures.Heater h = new ResultFixtures.Heater();
-        h.vdc = 20; // 62.8 V peak: below the 70.7 V peak of extra-low voltage
-        AnalysisResult r = h.build();
-        quiet(r, "TW-E02");
+        h.vdc = 12; // 37.7 V peak: under the 42.4 V peak where the limits begin
+        quiet(h.build(), "TW-E02");
+        ResultFixtures.Link p = new ResultFixtures.Link();
+        p.vdc = 200; // C1 about 2.4 kV worst: 12 nF · 2.4 kV ≈ 29 µC < 45 µC
+        quiet(p.build(), "TW-E02");
     }
 
     @Test
