@@ -173,7 +173,7 @@ final class CapacitorRules {
     /** TW-C03: dissipation of one part above what a film part sheds in still air without a thermal check. */
     static final class Dissipation extends BaseRule {
         Dissipation() {
-            super("TW-C03", "capacitor dissipation", "common practice (about 1 W per film part in still air)");
+            super("TW-C03", "capacitor dissipation", Limits.CAPACITOR_LOSS_SOURCE);
         }
 
         @Override
@@ -197,7 +197,7 @@ final class CapacitorRules {
     /** TW-C05: the part's self-resonance below or too close to the operating frequency. */
     static final class SelfResonance extends BaseRule {
         SelfResonance() {
-            super("TW-C05", "capacitor self-resonance", "common practice (SRF at least 5 × the operating frequency)");
+            super("TW-C05", "capacitor self-resonance", Limits.SRF_SOURCE);
         }
 
         @Override

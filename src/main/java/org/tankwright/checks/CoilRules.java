@@ -50,7 +50,7 @@ final class CoilRules {
     /** TW-L01: the coil's self-resonance below or too close to the operating frequency. */
     static final class SelfResonance extends BaseRule {
         SelfResonance() {
-            super("TW-L01", "coil self-resonance", "common practice (SRF at least 5 × the operating frequency)");
+            super("TW-L01", "coil self-resonance", Limits.SRF_SOURCE);
         }
 
         @Override
@@ -65,7 +65,7 @@ final class CoilRules {
     /** TW-L02: rms current density in a round or litz winding above what still air cools. */
     static final class CurrentDensity extends BaseRule {
         CurrentDensity() {
-            super("TW-L02", "current density in the winding", "common practice (5 A/mm² for air-cooled windings)");
+            super("TW-L02", "current density in the winding", Limits.CURRENT_DENSITY_SOURCE);
         }
 
         @Override
@@ -137,7 +137,7 @@ final class CoilRules {
      */
     static final class TurnToTurn extends BaseRule {
         TurnToTurn() {
-            super("TW-L04", "voltage between adjacent turns", "Paschen's law: minimum breakdown of air ≈ 327 V peak");
+            super("TW-L04", "voltage between adjacent turns", Limits.PASCHEN_SOURCE);
         }
 
         @Override
@@ -174,7 +174,7 @@ final class CoilRules {
     static final class WindingToCore extends BaseRule {
         WindingToCore() {
             super("TW-L05", "winding voltage to ferrite or ground",
-                    "Paschen's law: minimum breakdown of air ≈ 327 V peak; common practice of split series capacitors");
+                    Limits.PASCHEN_SOURCE + "; common practice of split series capacitors");
         }
 
         @Override

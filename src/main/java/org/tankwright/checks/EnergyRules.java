@@ -28,7 +28,7 @@ final class EnergyRules {
     static final class BankEnergy extends BaseRule {
         BankEnergy() {
             super("TW-E01", "stored energy in a capacitor bank",
-                    "IEC 60950-1 hazardous energy level (20 J; from memory)");
+                    Limits.HAZARDOUS_ENERGY_SOURCE);
         }
 
         @Override
@@ -100,7 +100,7 @@ final class EnergyRules {
     static final class DcLink extends BaseRule {
         DcLink() {
             super("TW-E03", "DC-link capacitor stays charged",
-                    "IEC 61140 / IEC 60449 voltage bands; IEC 60950-1 hazardous energy level (20 J; from memory)");
+                    Limits.VOLTAGE_BANDS + "; " + Limits.HAZARDOUS_ENERGY_SOURCE);
         }
 
         @Override

@@ -16,12 +16,11 @@ final class HeaterRules {
     private HeaterRules() {
     }
 
-    private static final String BURNS = "EN ISO 13732-1 burn thresholds for touching bare metal (≈ 51 °C for 1 min; from memory)";
 
     /** TW-H01: the workpiece gets hot enough to burn. */
     static final class HotWorkpiece extends BaseRule {
         HotWorkpiece() {
-            super("TW-H01", "hot workpiece", BURNS);
+            super("TW-H01", "hot workpiece", Limits.BURN_SOURCE);
         }
 
         @Override
@@ -66,7 +65,7 @@ final class HeaterRules {
     /** TW-H03: the work coil's loss needs coolant flow (or cannot be shed in air). */
     static final class Coolant extends BaseRule {
         Coolant() {
-            super("TW-H03", "work-coil cooling", "common practice (about 25 W for an air-cooled work coil); water ρ·c_p·ΔT");
+            super("TW-H03", "work-coil cooling", Limits.WORK_COIL_SOURCE);
         }
 
         @Override
@@ -105,7 +104,7 @@ final class HeaterRules {
     /** TW-H04: the work coil itself runs hot enough to burn. */
     static final class HotWorkCoil extends BaseRule {
         HotWorkCoil() {
-            super("TW-H04", "hot work coil", BURNS);
+            super("TW-H04", "hot work coil", Limits.BURN_SOURCE);
         }
 
         @Override

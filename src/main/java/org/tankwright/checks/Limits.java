@@ -14,6 +14,11 @@ public final class Limits {
     private Limits() {
     }
 
+    /** A limit's number as written in a source string. */
+    private static String n(double x) {
+        return org.tankwright.units.Quantities.number(x, 3).replaceAll("\\.0+$", "");
+    }
+
     // ---------------------------------------------------------------- voltage bands
 
     /** Upper limit of extra-low voltage, a.c. rms (IEC 61140, IEC 60449 band I; cross-checked: IEC Electropedia). */
@@ -45,6 +50,8 @@ public final class Limits {
      * (Paschen 1889; value ≈ 327 V from memory).
      */
     public static final double PASCHEN_MIN_AIR = 327.0;
+    /** The source of {@link #PASCHEN_MIN_AIR}. */
+    public static final String PASCHEN_SOURCE = "Paschen's law: minimum breakdown voltage of air ≈ " + n(PASCHEN_MIN_AIR) + " V peak (from memory)";
     /** Frequency above which IEC 60664-4 adds to IEC 60664-1 for clearance, creepage and solid insulation, Hz. */
     public static final double IEC_60664_4_FROM = 30e3;
 
@@ -55,14 +62,22 @@ public final class Limits {
      * 1/SRF_RATIO of it: its apparent value then shifts by 1/(1 − (f/f_SR)²) − 1 ≈ 4 % (common practice).
      */
     public static final double SRF_RATIO = 5.0;
+    /** The source of {@link #SRF_RATIO}. */
+    public static final String SRF_SOURCE = "common practice (self-resonance at least " + n(SRF_RATIO) + " × the operating frequency)";
     /** Loaded Q below which the fundamental-harmonic analysis loses accuracy (common practice, about 3). */
     public static final double FHA_MIN_Q = 3.0;
+    /** The source of {@link #FHA_MIN_Q}. */
+    public static final String FHA_SOURCE = "common practice (loaded Q of about " + n(FHA_MIN_Q) + " or more)";
     /** Margin to a derated rating below which the checks call it thin, fraction (common practice). */
     public static final double THIN_MARGIN = 0.10;
     /** Dissipation of one film capacitor part in still air above which it needs a thermal check, W (common practice). */
     public static final double CAPACITOR_PART_LOSS = 1.0;
+    /** The source of {@link #CAPACITOR_PART_LOSS}. */
+    public static final String CAPACITOR_LOSS_SOURCE = "common practice (about " + n(CAPACITOR_PART_LOSS) + " W per film part in still air)";
     /** rms current density in a round or litz winding cooled by still air, A/m² (common practice: 5 A/mm²). */
     public static final double CURRENT_DENSITY_AIR = 5e6;
+    /** The source of {@link #CURRENT_DENSITY_AIR}. */
+    public static final String CURRENT_DENSITY_SOURCE = "common practice (" + n(CURRENT_DENSITY_AIR / 1e6) + " A/mm² for air-cooled windings)";
     /** Litz strands should be no thicker than one skin depth (common practice; Sullivan, IEEE TPEL 14(2), 1999). */
     public static final double LITZ_STRAND_PER_SKIN_DEPTH = 1.0;
 
@@ -70,6 +85,8 @@ public final class Limits {
 
     /** Stored energy treated as a hazardous energy level (IEC 60950-1 §1.2.8.10: 20 J at 2 V or more; from memory, its 240 VA twin cross-checked). */
     public static final double HAZARDOUS_ENERGY = 20.0;
+    /** The source of {@link #HAZARDOUS_ENERGY}. */
+    public static final String HAZARDOUS_ENERGY_SOURCE = "IEC 60950-1 hazardous energy level (" + n(HAZARDOUS_ENERGY) + " J; from memory)";
     /**
      * Discharge limits for a part not to count as live (IEC 60335-1 §8.1.4; cross-checked against a
      * quotation of the clause): above 42.4 V peak up to 450 V, at most 0.1 µF; above 450 V up to
@@ -93,8 +110,12 @@ public final class Limits {
 
     /** Surface temperature above which touching bare metal for a minute burns, °C (EN ISO 13732-1; ≈ 51 °C from memory). */
     public static final double BURN_THRESHOLD_C = 51.0;
+    /** The source of {@link #BURN_THRESHOLD_C}. */
+    public static final String BURN_SOURCE = "EN ISO 13732-1 burn threshold for touching bare metal for 1 min (≈ " + n(BURN_THRESHOLD_C) + " °C; from memory)";
     /** Work-coil loss above which an air-cooled coil is no longer enough, W (common practice). */
     public static final double WORK_COIL_AIR_LOSS = 25.0;
+    /** The source of {@link #WORK_COIL_AIR_LOSS}. */
+    public static final String WORK_COIL_SOURCE = "common practice (about " + n(WORK_COIL_AIR_LOSS) + " W for an air-cooled work coil); water ρ·c_p·ΔT";
 
     // ---------------------------------------------------------------- field exposure
 

@@ -20,7 +20,7 @@ final class NetworkRules {
     /** TW-N01: loaded Q too low for the fundamental-harmonic analysis to hold. */
     static final class FundamentalValidity extends BaseRule {
         FundamentalValidity() {
-            super("TW-N01", "fundamental-harmonic analysis validity", "common practice (loaded Q of about 3 or more)");
+            super("TW-N01", "fundamental-harmonic analysis validity", Limits.FHA_SOURCE);
         }
 
         @Override

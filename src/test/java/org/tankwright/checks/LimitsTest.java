@@ -81,6 +81,14 @@ class LimitsTest {
     }
 
     @Test
+    void sourcesQuoteTheirLimits() {
+        assertTrue(Limits.SRF_SOURCE.contains("at least 5 ×"), Limits.SRF_SOURCE);
+        assertTrue(Limits.PASCHEN_SOURCE.contains("327 V"), Limits.PASCHEN_SOURCE);
+        assertTrue(Limits.HAZARDOUS_ENERGY_SOURCE.contains("(20 J"), Limits.HAZARDOUS_ENERGY_SOURCE);
+        assertTrue(Limits.CURRENT_DENSITY_SOURCE.contains("5 A/mm²"), Limits.CURRENT_DENSITY_SOURCE);
+    }
+
+    @Test
     void bandsFromTheRegulations() {
         // ITU Radio Regulations No. 5.150: 13.553–13.567 MHz; ITU-R SM.2110: 79–90 kHz for EV charging.
         assertNotNull(Limits.bandFor(13.56e6, 13.56e6));
