@@ -41,10 +41,8 @@ final class VoltageRules {
                 }
             }
             dc(out, Read.busVoltage(r), "$.source.vdc_V", "the DC bus");
-            if (r.network() != null) {
-                if (Read.dcOutput(d)) {
-                    dc(out, r.network().outputVoltage(), "RL", "the DC output");
-                }
+            if (r.network() != null && Read.dcOutput(d)) {
+                dc(out, r.network().outputVoltage(), "RL", "the DC output");
             }
             Source src = d == null ? null : d.source();
             if (src != null && src.kind() == SourceKind.SINE && src.vrms() != null && src.vrms() > Limits.ELV_AC_RMS) {
@@ -65,7 +63,7 @@ final class VoltageRules {
             boolean high = v > Limits.lvAcPeak();
             boolean envelope = v > s.voltagePeak();
             add(out, high ? Severity.DANGER : Severity.WARNING, v, high ? Limits.lvAcPeak() : Limits.elvAcPeak(), "V",
-                    s.id(), s.id() + " (" + s.role() + ") reaches " + q(v, VOLTAGE) + " peak "
+                    s.id(), s.id() + (s.role() == null || s.role().isEmpty() ? "" : " (" + s.role() + ")") + " reaches " + q(v, VOLTAGE) + " peak "
                             + Read.where(s, envelope) + ", above extra-low voltage (" + q(Limits.ELV_AC_RMS, VOLTAGE)
                             + " rms, " + q(Limits.elvAcPeak(), VOLTAGE) + " peak for a sine)"
                             + (high ? "; above the low-voltage band too: this is high voltage." : "."),
