@@ -25,7 +25,7 @@ abstract class BaseRule implements Rule {
         return title;
     }
 
-    /** The source of the rule's limit. */
+    @Override
     public final String source() {
         return source;
     }

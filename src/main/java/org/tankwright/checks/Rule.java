@@ -16,6 +16,9 @@ public interface Rule {
     /** What the rule checks, in a few words. */
     String title();
 
+    /** Where the rule's limit comes from (a standard, a paper, a datasheet rating or "common practice"). */
+    String source();
+
     /** Adds the rule's findings on {@code r} to {@code out}. */
     void check(AnalysisResult r, List<Finding> out);
 }

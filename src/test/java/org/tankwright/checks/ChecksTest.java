@@ -53,6 +53,7 @@ class ChecksTest {
             assertTrue(r.id().compareTo(previous) > 0, r.id() + " after " + previous);
             previous = r.id();
             assertFalse(r.title().isBlank());
+            assertFalse(r.source().isBlank(), r.id() + " names its limit's source");
         }
     }
 
