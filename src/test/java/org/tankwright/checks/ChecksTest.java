@@ -58,6 +58,14 @@ class ChecksTest {
     }
 
     @Test
+    void everyRuleIsDescribedInTheSafetyDoc() throws Exception {
+        String doc = java.nio.file.Files.readString(java.nio.file.Path.of("docs/safety.md"));
+        for (Rule r : Checks.RULES) {
+            assertTrue(doc.contains("| " + r.id() + " |"), r.id() + " missing from docs/safety.md");
+        }
+    }
+
+    @Test
     void emptyResultGivesNoFindingsAndNoFailures() {
         // The pipeline's sections may be null or NaN while the engines are incomplete: rules stay quiet.
         AnalysisResult r = Analysis.run(Presets.demo());
