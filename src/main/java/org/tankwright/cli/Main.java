@@ -19,6 +19,7 @@ import picocli.CommandLine.Command;
                 CoupleCommand.class,
                 FieldCommand.class,
                 CoilCommand.class,
+                CheckCommand.class,
         })
 public final class Main implements Runnable {
 
