@@ -75,8 +75,13 @@ final class NetworkStage {
     }
 
     static TuningResult tune(LinkDesign ld) {
+        return tune(ld, false);
+    }
+
+    /** Tunes and solves; {@code thresholds} adds the costly search for the load and coupling at which the link bifurcates. */
+    static TuningResult tune(LinkDesign ld, boolean thresholds) {
         try {
-            return Tuner.tune(ld);
+            return Tuner.tune(ld, thresholds);
         } catch (IllegalArgumentException e) {
             throw new AnalysisException("the network cannot be solved: " + e.getMessage(), false);
         }
