@@ -119,4 +119,9 @@ public record MultilayerSolenoid(double formerDiameter, int turns, int layers, d
     public String build() {
         return layers + " layers x " + turnsPerLayer() + " turns, depth " + Checks.m(windingDepth());
     }
+
+    @Override
+    public double turnPitch() {
+        return pitch;
+    }
 }
