@@ -73,4 +73,16 @@ public record EnvelopeSpec(CouplingSurface coupling, boolean twoCouplingAxes, do
         return new EnvelopeSpec(coupling, twoCouplingAxes, loadMin, loadMax, frequencyMin, frequencyMax, temperatureMinC, temperatureMaxC,
                 alpha, referenceC, control, n, tripMargin);
     }
+
+    /** The temperature at which the coil resistances were entered, and their temperature coefficient (1/K). */
+    public EnvelopeSpec withResistanceTemperature(double newReferenceC, double newAlpha) {
+        return new EnvelopeSpec(coupling, twoCouplingAxes, loadMin, loadMax, frequencyMin, frequencyMax, temperatureMinC,
+                temperatureMaxC, newAlpha, newReferenceC, control, gridPerAxis, tripMargin);
+    }
+
+    /** The margin of the trip levels above the worst normal values (a fraction). */
+    public EnvelopeSpec withTripMargin(double margin) {
+        return new EnvelopeSpec(coupling, twoCouplingAxes, loadMin, loadMax, frequencyMin, frequencyMax, temperatureMinC,
+                temperatureMaxC, alpha, referenceC, control, gridPerAxis, margin);
+    }
 }
