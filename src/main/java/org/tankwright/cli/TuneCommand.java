@@ -118,7 +118,8 @@ public final class TuneCommand implements Callable<Integer> {
 
     private LinkDesign tankDesign(Topology t) {
         for (String[] pair : new String[][]{{"--l1", l1}, {"--l2", l2}, {"--m", m}, {"--k", k}, {"--r1", r1},
-                {"--r2", r2}, {"--load", load}, {"--rectifier", rectifier}, {"--battery", battery}, {"--c2", c2}}) {
+                {"--r2", r2}, {"--load", load}, {"--rectifier", rectifier}, {"--battery", battery}, {"--c2", c2},
+                {"--esr2", esr2}, {"--esl2", esl2}, {"--target-phase", targetPhase}}) {
             if (pair[1] != null) {
                 throw usage(pair[0] + " is for a two-coil link; a " + topology + " tank takes --l, --r, --c or --f0");
             }

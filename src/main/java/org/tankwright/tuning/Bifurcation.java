@@ -138,7 +138,7 @@ public final class Bifurcation {
             if (c != prevC) {
                 double lo = prevX;
                 double hi = x;
-                for (int it = 0; it < 40; it++) {
+                for (int it = 0; it < 34; it++) { // bracket ÷ 2³⁴: below 1e-10 relative
                     double m = log ? Math.sqrt(lo * hi) : (lo + hi) / 2;
                     if (counter.applyAsInt(m) == prevC) {
                         lo = m;

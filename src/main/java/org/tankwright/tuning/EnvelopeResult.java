@@ -23,14 +23,16 @@ public record EnvelopeResult(List<Point> grid, Map<Stress, Worst> worst, List<Co
     }
 
     /**
-     * A point of the envelope: s along the coupling path and its state, the load in the design
+     * A point of the envelope: s (and t, the second coupling axis, 0 for a path) along the coupling
+     * range and its state, the load in the design
      * load's unit, frequency (Hz) and coil temperature (°C).
      */
-    public record Coordinates(double s, double k, double m, double l1, double l2, double load, double frequency,
+    public record Coordinates(double s, double t, double k, double m, double l1, double l2, double load, double frequency,
                               double temperatureC) {
         Map<String, Object> keyValues() {
             Map<String, Object> m0 = new LinkedHashMap<>();
-            m0.put("coupling_path_s", s);
+            m0.put("coupling_s", s);
+            m0.put("coupling_t", t);
             m0.put("coupling_k", k);
             m0.put("m_H", m);
             m0.put("l1_H", l1);

@@ -1,7 +1,8 @@
 package org.tankwright.tuning;
 
 /**
- * The operating envelope a design must survive: the coupling range (with L1, L2 moving), the load
+ * The operating envelope a design must survive: the coupling range (with L1, L2 moving; one axis,
+ * a {@link CouplingPath}, or two, a {@link CouplingSurface} such as gap × offset), the load
  * range in the design load's own unit (AC Ω for a resistor, DC Ω behind a rectifier, volts for a
  * battery), the drive frequency range, the coil temperature range (the coils' AC resistances,
  * entered at {@code referenceC}, scale by 1 + α·(T − referenceC)), the control, the grid density
@@ -10,7 +11,7 @@ package org.tankwright.tuning;
  * <p>Temperature scaling with the DC temperature coefficient is exact while the resistance is
  * DC-like and an upper bound when skin effect dominates (R_ac then grows only as √ρ).
  */
-public record EnvelopeSpec(CouplingPath coupling, double loadMin, double loadMax, double frequencyMin,
+public record EnvelopeSpec(CouplingSurface coupling, boolean twoCouplingAxes, double loadMin, double loadMax, double frequencyMin,
                            double frequencyMax, double temperatureMinC, double temperatureMaxC, double alpha,
                            double referenceC, ControlSpec control, int gridPerAxis, double tripMargin) {
 
@@ -47,22 +48,41 @@ public record EnvelopeSpec(CouplingPath coupling, double loadMin, double loadMax
     /** A spec at one frequency and temperature (20 °C, copper), 5 points per axis, 10 % trip margin. */
     public static EnvelopeSpec of(CouplingPath coupling, double loadMin, double loadMax, double frequency,
                                   ControlSpec control) {
-        return new EnvelopeSpec(coupling, loadMin, loadMax, frequency, frequency, 20, 20, COPPER_ALPHA, 20, control, 5,
-                DEFAULT_TRIP_MARGIN);
+        return new EnvelopeSpec((sPath, t) -> coupling.at(sPath), false, loadMin, loadMax, frequency, frequency, 20, 20,
+                COPPER_ALPHA, 20, control, 5, DEFAULT_TRIP_MARGIN);
+    }
+
+    /** The same over a two-axis coupling range (e.g. gap × offset). */
+    public static EnvelopeSpec of(CouplingSurface coupling, double loadMin, double loadMax, double frequency,
+                                  ControlSpec control) {
+        return new EnvelopeSpec(coupling, true, loadMin, loadMax, frequency, frequency, 20, 20, COPPER_ALPHA, 20,
+                control, 5, DEFAULT_TRIP_MARGIN);
     }
 
     public EnvelopeSpec withFrequencyRange(double a, double b) {
-        return new EnvelopeSpec(coupling, loadMin, loadMax, a, b, temperatureMinC, temperatureMaxC, alpha, referenceC,
+        return new EnvelopeSpec(coupling, twoCouplingAxes, loadMin, loadMax, a, b, temperatureMinC, temperatureMaxC, alpha, referenceC,
                 control, gridPerAxis, tripMargin);
     }
 
     public EnvelopeSpec withTemperatureRange(double a, double b) {
-        return new EnvelopeSpec(coupling, loadMin, loadMax, frequencyMin, frequencyMax, a, b, alpha, referenceC,
+        return new EnvelopeSpec(coupling, twoCouplingAxes, loadMin, loadMax, frequencyMin, frequencyMax, a, b, alpha, referenceC,
                 control, gridPerAxis, tripMargin);
     }
 
     public EnvelopeSpec withGrid(int n) {
-        return new EnvelopeSpec(coupling, loadMin, loadMax, frequencyMin, frequencyMax, temperatureMinC, temperatureMaxC,
+        return new EnvelopeSpec(coupling, twoCouplingAxes, loadMin, loadMax, frequencyMin, frequencyMax, temperatureMinC, temperatureMaxC,
                 alpha, referenceC, control, n, tripMargin);
+    }
+
+    /** The temperature at which the coil resistances were entered, and their temperature coefficient (1/K). */
+    public EnvelopeSpec withResistanceTemperature(double newReferenceC, double newAlpha) {
+        return new EnvelopeSpec(coupling, twoCouplingAxes, loadMin, loadMax, frequencyMin, frequencyMax, temperatureMinC,
+                temperatureMaxC, newAlpha, newReferenceC, control, gridPerAxis, tripMargin);
+    }
+
+    /** The margin of the trip levels above the worst normal values (a fraction). */
+    public EnvelopeSpec withTripMargin(double margin) {
+        return new EnvelopeSpec(coupling, twoCouplingAxes, loadMin, loadMax, frequencyMin, frequencyMax, temperatureMinC,
+                temperatureMaxC, alpha, referenceC, control, gridPerAxis, margin);
     }
 }

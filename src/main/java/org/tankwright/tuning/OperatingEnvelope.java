@@ -22,7 +22,8 @@ import java.util.Map;
  * target output, notes where the target cannot be reached (the controller then sits at its limit),
  * finds the worst value of each {@link Stress} on the grid and then refines it by a pattern search
  * through the interior of the envelope, derives the trip levels, and checks the fault cases.
- * Coordinates are normalised to [0, 1] per axis; the load axis is logarithmic.
+ * Coordinates are normalised to [0, 1] per axis (coupling s and t, load, frequency, temperature);
+ * the load axis is logarithmic.
  */
 public final class OperatingEnvelope {
     private static final int REFINE_HALVINGS = 7;
@@ -74,8 +75,13 @@ public final class OperatingEnvelope {
      * load's unit, frequency f (Hz) and coil temperature (°C).
      */
     public Controlled controlledAt(double sPath, double loadValue, double f, double temperatureC) {
-        CouplingPoint cp = spec.coupling().at(sPath);
-        Coordinates c = new Coordinates(sPath, cp.k(), cp.m(), cp.l1(), cp.l2(), loadValue, f, temperatureC);
+        return controlledAt(sPath, 0, loadValue, f, temperatureC);
+    }
+
+    /** The same on a two-axis coupling range: s and t in [0, 1]. */
+    public Controlled controlledAt(double sAxis, double tAxis, double loadValue, double f, double temperatureC) {
+        CouplingPoint cp = spec.coupling().at(sAxis, tAxis);
+        Coordinates c = new Coordinates(sAxis, tAxis, cp.k(), cp.m(), cp.l1(), cp.l2(), loadValue, f, temperatureC);
         return control(c, loadAt(loadValue));
     }
 
@@ -86,6 +92,7 @@ public final class OperatingEnvelope {
         int nl = spec.loadMin() == spec.loadMax() ? 1 : n;
         int nf = spec.frequencyMin() == spec.frequencyMax() ? 1 : n;
         int nt = spec.temperatureMinC() == spec.temperatureMaxC() ? 1 : n;
+        int no = spec.twoCouplingAxes() ? n : 1;
         List<Point> grid = new ArrayList<>();
         List<Coordinates> unreachable = new ArrayList<>();
         Map<Stress, double[]> bestU = new EnumMap<>(Stress.class);
@@ -95,18 +102,20 @@ public final class OperatingEnvelope {
             for (int b = 0; b < nl; b++) {
                 for (int c = 0; c < nf; c++) {
                     for (int e = 0; e < nt; e++) {
-                        double[] u = {frac(a, nc), frac(b, nl), frac(c, nf), frac(e, nt)};
-                        Controlled x = control(u);
-                        grid.add(new Point(x.at(), x.amplitude(), x.duty(), x.reachable(), held(x.op())));
-                        if (!x.reachable()) {
-                            unreachable.add(x.at());
+                        for (int o = 0; o < no; o++) {
+                            double[] u = {frac(a, nc), frac(b, nl), frac(c, nf), frac(e, nt), frac(o, no)};
+                            Controlled x = control(u);
+                            grid.add(new Point(x.at(), x.amplitude(), x.duty(), x.reachable(), held(x.op())));
+                            if (!x.reachable()) {
+                                unreachable.add(x.at());
+                            }
+                            consider(x, u, best, bestU);
                         }
-                        consider(x, u, best, bestU);
                     }
                 }
             }
         }
-        boolean[] free = {true, nl > 1, nf > 1, nt > 1};
+        boolean[] free = {true, nl > 1, nf > 1, nt > 1, no > 1};
         for (Stress st : best.keySet().toArray(new Stress[0])) {
             refine(st, bestU.get(st), free, best, bestU);
         }
@@ -153,7 +162,7 @@ public final class OperatingEnvelope {
             boolean moved = true;
             while (moved) {
                 moved = false;
-                for (int dim = 0; dim < 4; dim++) {
+                for (int dim = 0; dim < free.length; dim++) {
                     if (!free[dim]) {
                         continue;
                     }
@@ -183,13 +192,13 @@ public final class OperatingEnvelope {
     }
 
     private Coordinates coordinates(double[] u) {
-        CouplingPoint cp = spec.coupling().at(u[0]);
+        CouplingPoint cp = spec.coupling().at(u[0], u[4]);
         double lo = spec.loadMin();
         double hi = spec.loadMax();
         double ld = lo == hi ? lo : lo * Math.pow(hi / lo, u[1]);
         double f = spec.frequencyMin() + (spec.frequencyMax() - spec.frequencyMin()) * u[2];
         double t = spec.temperatureMinC() + (spec.temperatureMaxC() - spec.temperatureMinC()) * u[3];
-        return new Coordinates(u[0], cp.k(), cp.m(), cp.l1(), cp.l2(), ld, f, t);
+        return new Coordinates(u[0], u[4], cp.k(), cp.m(), cp.l1(), cp.l2(), ld, f, t);
     }
 
     private Load loadAt(double x) {
@@ -276,8 +285,8 @@ public final class OperatingEnvelope {
     }
 
     private List<Fault> faults(TripLevels trip, List<String> warnings) {
-        CouplingPoint p0 = spec.coupling().at(0);
-        Coordinates nominal = new Coordinates(0, p0.k(), p0.m(), p0.l1(), p0.l2(), nominalLoad(), d.frequency(),
+        CouplingPoint p0 = spec.coupling().at(0, 0);
+        Coordinates nominal = new Coordinates(0, 0, p0.k(), p0.m(), p0.l1(), p0.l2(), nominalLoad(), d.frequency(),
                 spec.referenceC());
         Controlled held = control(nominal, loadAt(nominal.load()));
         List<Fault> out = new ArrayList<>();
@@ -316,16 +325,21 @@ public final class OperatingEnvelope {
 
     /** The coupling-path state with the smallest |M|, with M set to 0: the receiver taken away. */
     private Coordinates weakest() {
-        CouplingPoint w = spec.coupling().at(0);
+        CouplingPoint w = spec.coupling().at(0, 0);
         double ws = 0;
-        for (int i = 1; i <= 20; i++) {
-            CouplingPoint p = spec.coupling().at(i / 20.0);
-            if (Math.abs(p.m()) < Math.abs(w.m())) {
-                w = p;
-                ws = i / 20.0;
+        double wt = 0;
+        int nt = spec.twoCouplingAxes() ? 20 : 0;
+        for (int i = 0; i <= 20; i++) {
+            for (int j = 0; j <= nt; j++) {
+                CouplingPoint p = spec.coupling().at(i / 20.0, nt == 0 ? 0 : j / 20.0);
+                if (Math.abs(p.m()) < Math.abs(w.m())) {
+                    w = p;
+                    ws = i / 20.0;
+                    wt = nt == 0 ? 0 : j / 20.0;
+                }
             }
         }
-        return new Coordinates(ws, 0, 0, w.l1(), w.l2(), nominalLoad(), d.frequency(), spec.referenceC());
+        return new Coordinates(ws, wt, 0, 0, w.l1(), w.l2(), nominalLoad(), d.frequency(), spec.referenceC());
     }
 
     private Fault fault(String name, Coordinates at, Load ld, Controlled held, TripLevels trip) {

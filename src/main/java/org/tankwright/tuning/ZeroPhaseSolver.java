@@ -4,6 +4,10 @@ import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.tankwright.circuit.PhasorSolver;
 import org.tankwright.circuit.Topologies;
 
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+
 /**
  * Moves C1 alone, with every loss in the network, until the input phase arg(V/I) at the source
  * equals a target (0° for the textbook zero-phase-angle case, or a small inductive angle so the
@@ -27,43 +31,42 @@ public final class ZeroPhaseSolver {
         int src = s.network().sourceIndex();
         double lo = Math.log(c1Guess / SPAN);
         double hi = Math.log(c1Guess * SPAN);
-        double bestX = Math.log(c1Guess);
-        double bestErr = Double.POSITIVE_INFINITY;
-        double prevX = Double.NaN;
-        double prevF = Double.NaN;
-        double rootA = Double.NaN;
-        double rootB = Double.NaN;
         double center = Math.log(c1Guess);
+        double[] xs = new double[SCAN];
+        double[] fs = new double[SCAN];
+        int best = 0;
         for (int i = 0; i < SCAN; i++) {
-            double x = lo + (hi - lo) * i / (SCAN - 1);
-            double fx = phaseError(s, f, c1, src, x, targetDeg);
-            if (Math.abs(fx) < bestErr) {
-                bestErr = Math.abs(fx);
-                bestX = x;
+            xs[i] = lo + (hi - lo) * i / (SCAN - 1);
+            fs[i] = phaseError(s, f, c1, src, xs[i], targetDeg);
+            if (Math.abs(fs[i]) < Math.abs(fs[best])) {
+                best = i;
             }
-            if (i > 0 && prevF * fx <= 0 && Math.abs(prevF - fx) < 90) {
-                boolean closer = Double.isNaN(rootA) || Math.abs(x - center) < Math.abs(rootB - center);
-                if (closer) {
-                    rootA = prevX;
-                    rootB = x;
-                }
+        }
+        // Every sign change brackets a crossing; try them nearest the starting value first. A bracket
+        // around a lossless pole or zero (the phase jumps between ±90° there) refines to a point whose
+        // phase misses the target, and is skipped.
+        List<Integer> brackets = new ArrayList<>();
+        for (int i = 1; i < SCAN; i++) {
+            if (fs[i - 1] * fs[i] <= 0) {
+                brackets.add(i);
             }
-            prevX = x;
-            prevF = fx;
         }
-        if (Double.isNaN(rootA)) {
-            double c = Math.exp(bestX);
-            s.setCapacitance(c1, c);
-            s.solve(f);
-            return new PhaseSolve(c, s.inputPhaseDeg(src), targetDeg, false,
-                    "no C1 within a factor 1000 of " + c1Guess + " F reaches the target phase; closest taken");
-        }
+        brackets.sort(Comparator.comparingDouble(i -> Math.abs((xs[i - 1] + xs[i]) / 2 - center)));
         BrentSolver brent = new BrentSolver(1e-14, 1e-15);
-        double x = brent.solve(200, v -> phaseError(s, f, c1, src, v, targetDeg), rootA, rootB);
-        double c = Math.exp(x);
+        for (int i : brackets) {
+            double x = fs[i - 1] == 0 ? xs[i - 1] : fs[i] == 0 ? xs[i]
+                    : brent.solve(200, v -> phaseError(s, f, c1, src, v, targetDeg), xs[i - 1], xs[i]);
+            double err = phaseError(s, f, c1, src, x, targetDeg);
+            if (Math.abs(err) < 1e-6) {
+                return new PhaseSolve(Math.exp(x), s.inputPhaseDeg(src), targetDeg, true,
+                        "solved with losses (Brent on ln C1)");
+            }
+        }
+        double c = Math.exp(xs[best]);
         s.setCapacitance(c1, c);
         s.solve(f);
-        return new PhaseSolve(c, s.inputPhaseDeg(src), targetDeg, true, "solved with losses (Brent on ln C1)");
+        return new PhaseSolve(c, s.inputPhaseDeg(src), targetDeg, false,
+                "no C1 within a factor 1000 of " + c1Guess + " F reaches the target phase; closest taken");
     }
 
     private static double phaseError(PhasorSolver s, double f, int c1, int src, double lnC, double target) {

@@ -75,4 +75,21 @@ class TextbookCompensationTest {
         double c1 = TextbookCompensation.c1(Topology.SP, v, W, RL);
         assertTrue(Math.abs(phaseAt(Topology.SP, 0.5, c1)) > 1e-3);
     }
+
+    @ParameterizedTest
+    @EnumSource(value = Topology.class, names = {"SS", "SP", "PS", "PP"})
+    void highQTargetPhaseIsFoundFromAnyStartingValue(Topology t) {
+        // A steep phase: crossings between scan points must still be found (a high-Q primary).
+        LinkValues v = LinkValues.fromCoupling(L1, L2, K, 1e-3, 1e-3);
+        double textbook = TextbookCompensation.c1(t, LinkValues.fromCoupling(L1, L2, K, 0, 0), W, RL);
+        for (double start : new double[]{textbook * 1.013, textbook * 0.71, textbook * 3.3}) {
+            PhasorSolver s = new PhasorSolver(Topologies.link(t, v, CapacitorSpec.ideal(start),
+                    CapacitorSpec.ideal(TextbookCompensation.c2(L2, W)), Source.sine(100), RL));
+            PhaseSolve ps = ZeroPhaseSolver.solve(s, F, 7, start);
+            assertTrue(ps.reached(), t + " from " + start);
+            assertEquals(7, ps.phaseDeg(), 1e-6);
+            s.solve(F);
+            assertEquals(7, s.inputPhaseDeg(s.network().sourceIndex()), 1e-6, "C1 left at the solution");
+        }
+    }
 }
