@@ -86,8 +86,9 @@ public final class BankSynthesis {
             if (req.allowTrim()) {
                 for (CapacitorPart p : usable) {
                     for (int n = 1; n <= req.maxSeries(); n++) {
+                        boolean overVoltage = overVoltageAtAnyM(p, n);
                         for (int m = 1; m <= req.maxParallel() && n * m + 1 <= threshold(); m++) {
-                            trims(p, n, m, lo, hi);
+                            trims(p, n, m, lo, hi, overVoltage);
                         }
                     }
                 }
@@ -147,9 +148,9 @@ public final class BankSynthesis {
             return req.stress().currentRms() * share > req.derating().currentFraction() * p.currentRating() * (1 + SLACK);
         }
 
-        private void trims(CapacitorPart p, int n, int m, double lo, double hi) {
+        private void trims(CapacitorPart p, int n, int m, double lo, double hi, boolean overVoltage) {
             double cm = m * p.capacitance() / n;
-            if (cm < hi && !overVoltageAtAnyM(p, n)) {
+            if (cm < hi && !overVoltage) {
                 scanTrims(p, n, m, TrimPosition.PARALLEL, Math.max(0, lo - cm), hi - cm);
             }
             if (cm > lo && !overCurrentInSeries(p, m)) {
@@ -168,6 +169,9 @@ public final class BankSynthesis {
         private void scanTrims(CapacitorPart p, int n, int m, TrimPosition pos, double tLo, double tHi) {
             if (untrimmedKept(p, n, m)) {
                 return; // the same array without trim is feasible and has fewer parts
+            }
+            if (caps.length == 0 || tLo * (1 - SLACK) > caps[caps.length - 1] || tHi * (1 + SLACK) < caps[0]) {
+                return;
             }
             int lo = firstAtLeast(tLo * (1 - SLACK));
             int hi = firstAtLeast(Math.nextUp(tHi * (1 + SLACK))) - 1;

@@ -106,7 +106,9 @@ public final class CapsCommand implements Callable<Integer> {
             source = cat.name();
         }
         if (json) {
-            CliSupport.printJson(toJson(req, r, source));
+            Map<String, Object> out = toJson(req, r, source);
+            out.put("derating_source", derating == null ? "common-practice defaults" : derating.toString());
+            CliSupport.printJson(out);
         } else {
             printText(req, r, source);
         }

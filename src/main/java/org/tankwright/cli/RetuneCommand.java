@@ -101,6 +101,7 @@ public final class RetuneCommand implements Callable<Integer> {
             out.put("k", k);
         }
         if (json) {
+            out.put("cautions", List.of(CapsCommand.CAUTION));
             CliSupport.printJson(out);
         } else {
             printText(r, k);

@@ -39,9 +39,14 @@ public final class CapacitorBench {
         }
         System.out.println("catalogue: " + parts.size() + " parts");
         double[][] cases = {{47e-9, 400, 5, 100e3}, {220e-9, 800, 0, 30e3}, {10e-9, 1500, 0, 200e3}, {1e-6, 300, 0, 20e3}};
+        for (int w = 0; w < 40; w++) { // warm the JIT on every case before timing any
+            for (double[] c : cases) {
+                BankSynthesis.search(BankRequest.of(c[0], 0.02, BankStress.sinusoidal(c[1], c[2], 0, c[3])), parts);
+            }
+        }
         for (double[] c : cases) {
             BankRequest req = BankRequest.of(c[0], 0.02, BankStress.sinusoidal(c[1], c[2], 0, c[3]));
-            double ms = median(() -> BankSynthesis.search(req, parts), 15);
+            double ms = median(() -> BankSynthesis.search(req, parts), 31);
             BankSearchResult r = BankSynthesis.search(req, parts);
             System.out.printf(Locale.ROOT, "search %.3g F, %.0f V, %.0f A, %.0f Hz: %.2f ms CPU median, %d layouts, best: %s%n",
                     c[0], c[1], c[2], c[3], ms, r.evaluated(), r.best() == null ? "none" : r.best().layout().describe());
@@ -108,9 +113,9 @@ public final class CapacitorBench {
         return best.values().stream().sorted(BankSynthesis.ORDER).limit(req.alternatives()).toList();
     }
 
-    /** Median thread CPU time (ms) over runs after 3 warm-up runs: CPU time, since the machine is shared. */
+    /** Median thread CPU time (ms) over runs after 40 warm-up runs (JIT): CPU time, since the machine is shared. */
     private static double median(Runnable r, int runs) {
-        for (int i = 0; i < 3; i++) {
+        for (int i = 0; i < 40; i++) {
             r.run();
         }
         java.lang.management.ThreadMXBean mx = java.lang.management.ManagementFactory.getThreadMXBean();
