@@ -5,6 +5,7 @@ import org.tankwright.coupling.CoupledCoils;
 import org.tankwright.coupling.CouplingRange;
 import org.tankwright.coupling.CouplingResult;
 import org.tankwright.coupling.CouplingSweep;
+import org.tankwright.coupling.ShieldLoss;
 import org.tankwright.magnetics.CoilGeometry;
 import org.tankwright.magnetics.FilamentSum;
 import org.tankwright.units.Dimension;
@@ -110,14 +111,40 @@ public final class CoupleCommand implements Callable<Integer> {
         List<CouplingResult> sweep = sweep(link, dist, dx, dy);
         OptionalDouble nul = findNull && at != null ? CouplingSweep.nullOffset(link, at.gap(), 0, 2 * link.radiusSum()) : OptionalDouble.empty();
         CouplingRange range = envelope == null ? null : envelope(link);
+        Map<String, ShieldLoss.Result> shields = shields(link);
         if (csv) {
             printCsv(sweep.isEmpty() && at != null ? List.of(at) : sweep);
         } else if (json) {
-            CliSupport.printJson(toJson(at, sweep, nul, range));
+            Map<String, Object> m = toJson(at, sweep, nul, range);
+            shields.forEach((c, r) -> m.put("shield_resistance_" + c + "_ohm", r.resistance()));
+            CliSupport.printJson(m);
         } else {
             printText(at, sweep, nul, range);
+            shields.forEach((c, r) -> {
+                System.out.printf("shield loss %s  %s in series with coil %s (skin depth %s)%n", c,
+                        Quantities.format(r.resistance(), Dimension.RESISTANCE, 3), c, fmt(r.skinDepth()));
+                r.provenance().notes().forEach(n -> System.out.println("note           " + n));
+            });
         }
         return ExitCodes.OK;
+    }
+
+    /** The eddy loss of each metal shield, for the coils whose --X-frequency is given. */
+    private Map<String, ShieldLoss.Result> shields(CoupledCoils link) {
+        Map<String, ShieldLoss.Result> out = new LinkedHashMap<>();
+        double fa = coilA.frequency();
+        double fb = coilB.frequency();
+        try {
+            if (!Double.isNaN(fa)) {
+                link.shieldLoss(true, fa).ifPresent(r -> out.put("a", r));
+            }
+            if (!Double.isNaN(fb)) {
+                link.shieldLoss(false, fb).ifPresent(r -> out.put("b", r));
+            }
+        } catch (IllegalArgumentException e) {
+            throw new ExitCodes.UserError(ExitCodes.INVALID_INPUT, "shield loss: " + e.getMessage());
+        }
+        return out;
     }
 
     private CoupledCoils link() {

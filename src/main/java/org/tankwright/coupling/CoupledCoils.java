@@ -223,6 +223,19 @@ public final class CoupledCoils {
     }
 
     /**
+     * Eddy loss of coil a's (or b's) metal shield at {@code frequency}, as a resistance in series with
+     * that coil ({@link ShieldLoss}); empty when that coil has no metal plate.
+     */
+    public java.util.Optional<ShieldLoss.Result> shieldLoss(boolean ofCoilA, double frequency) {
+        Coil c = ofCoilA ? coilA : coilB;
+        if (c.plate() == null || c.plate().material() != BackingPlate.Material.METAL) {
+            return java.util.Optional.empty();
+        }
+        double plane = ofCoilA ? aBottom - c.plate().spacing() : bTop + c.plate().spacing();
+        return java.util.Optional.of(ShieldLoss.addedResistance(ofCoilA ? a : b, plane, c.plate(), frequency));
+    }
+
+    /**
      * Flux density at (x, y, z) in coil a's frame with b at the given placement, coil a carrying the rms
      * phasor current {@code ia} and coil b {@code ib}, including both plates' images.
      */
