@@ -7,7 +7,7 @@ import org.tankwright.coupling.CouplingResult;
 import org.tankwright.coupling.CouplingSweep;
 import org.tankwright.coupling.ShieldLoss;
 import org.tankwright.magnetics.CoilGeometry;
-import org.tankwright.magnetics.FilamentSum;
+import org.tankwright.magnetics.CoilModel;
 import org.tankwright.units.Dimension;
 import org.tankwright.units.Quantities;
 import picocli.CommandLine.Command;
@@ -129,18 +129,12 @@ public final class CoupleCommand implements Callable<Integer> {
         return ExitCodes.OK;
     }
 
-    /** The eddy loss of each metal shield, for the coils whose --X-frequency is given. */
+    /** The eddy loss of each metal shield at its coil's operating frequency (--a-frequency, --b-frequency). */
     private Map<String, ShieldLoss.Result> shields(CoupledCoils link) {
         Map<String, ShieldLoss.Result> out = new LinkedHashMap<>();
-        double fa = coilA.frequency();
-        double fb = coilB.frequency();
         try {
-            if (!Double.isNaN(fa)) {
-                link.shieldLoss(true, fa).ifPresent(r -> out.put("a", r));
-            }
-            if (!Double.isNaN(fb)) {
-                link.shieldLoss(false, fb).ifPresent(r -> out.put("b", r));
-            }
+            link.shieldLoss(true, coilA.frequency()).ifPresent(r -> out.put("a", r));
+            link.shieldLoss(false, coilB.frequency()).ifPresent(r -> out.put("b", r));
         } catch (IllegalArgumentException e) {
             throw new ExitCodes.UserError(ExitCodes.INVALID_INPUT, "shield loss: " + e.getMessage());
         }
@@ -155,9 +149,9 @@ public final class CoupleCommand implements Callable<Integer> {
 
     private CoupledCoils.Coil coil(String name, CoilOptionSet options) {
         CoilGeometry g = options.geometry();
-        options.temperature();
-        options.frequency();
-        return new CoupledCoils.Coil(name, g.filaments(), FilamentSum.selfInductance(g.filaments()), plate(name), -g.zMin(), g.zMax());
+        // the coil model's chosen self-inductance (the most accurate valid model), as `tankwright coil` reports it
+        double l = CoilModel.of(g).inductance();
+        return new CoupledCoils.Coil(name, g.filaments(), l, plate(name), -g.zMin(), g.zMax());
     }
 
     private String plateText(String c, String o) {

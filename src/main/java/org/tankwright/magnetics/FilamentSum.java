@@ -25,6 +25,27 @@ public final class FilamentSum {
         return sum;
     }
 
+    /**
+     * Self inductance of turns that each are a regular polygon of {@code sides} segments in order,
+     * segment k being segment 0 rotated by 2πk/sides about z (as {@link PolygonSpiral} builds them):
+     * by that symmetry L = sides · Σ_i Σ_(j,k) M(segment (i,0), segment (j,k)), a factor {@code sides} fewer
+     * kernel evaluations than {@link #selfInductance(List)}.
+     */
+    public static double selfInductanceRotational(List<Filament> filaments, int sides) {
+        int n = filaments.size();
+        if (n % sides != 0) {
+            throw new IllegalArgumentException("filament count " + n + " is not a multiple of " + sides + " sides");
+        }
+        double sum = 0.0;
+        for (int i = 0; i < n; i += sides) {
+            Filament fi = filaments.get(i);
+            for (int j = 0; j < n; j++) {
+                sum += j == i ? self(fi) : mutual(fi, filaments.get(j));
+            }
+        }
+        return sides * sum;
+    }
+
     /** Mutual inductance between two coils given as filaments, H (each list in series). */
     public static double mutualInductance(List<Filament> a, List<Filament> b) {
         double sum = 0.0;

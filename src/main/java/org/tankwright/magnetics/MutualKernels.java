@@ -193,33 +193,35 @@ public final class MutualKernels {
         return Math.log((sumR + lb) / small);
     }
 
+    /**
+     * Parameter along a (0..la) of the closest approach between the two segments (Ericson, Real-Time
+     * Collision Detection, 2005, §5.1.9: closest points of two segments, clamped).
+     */
     private static double closestParameter(Segment a, double la, double ux, double uy, double uz, Segment b, double lb) {
-        double best = 0.0;
-        double bestD = Double.MAX_VALUE;
-        int n = 16;
-        for (int i = 0; i <= n; i++) {
-            double s = la * i / n;
-            double d = distanceToSegment(a.x0() + s * ux, a.y0() + s * uy, a.z0() + s * uz, b, lb);
-            if (d < bestD) {
-                bestD = d;
-                best = s;
-            }
+        double vx = (b.x1() - b.x0()) / lb;
+        double vy = (b.y1() - b.y0()) / lb;
+        double vz = (b.z1() - b.z0()) / lb;
+        double rx = a.x0() - b.x0();
+        double ry = a.y0() - b.y0();
+        double rz = a.z0() - b.z0();
+        double c = ux * vx + uy * vy + uz * vz;
+        double d = ux * rx + uy * ry + uz * rz;
+        double e = vx * rx + vy * ry + vz * rz;
+        double den = 1 - c * c;
+        double s = den > 1e-14 ? clamp((c * e - d) / den, 0, la) : 0.0;
+        double t = s * c + e;
+        if (t < 0) {
+            t = 0;
+            s = clamp(-d, 0, la);
+        } else if (t > lb) {
+            t = lb;
+            s = clamp(lb * c - d, 0, la);
         }
-        // refine by golden-section search on the bracketing interval (distance is convex along a line)
-        double lo = Math.max(0.0, best - la / n);
-        double hi = Math.min(la, best + la / n);
-        for (int it = 0; it < 40; it++) {
-            double m1 = lo + 0.382 * (hi - lo);
-            double m2 = lo + 0.618 * (hi - lo);
-            double d1 = distanceToSegment(a.x0() + m1 * ux, a.y0() + m1 * uy, a.z0() + m1 * uz, b, lb);
-            double d2 = distanceToSegment(a.x0() + m2 * ux, a.y0() + m2 * uy, a.z0() + m2 * uz, b, lb);
-            if (d1 < d2) {
-                hi = m2;
-            } else {
-                lo = m1;
-            }
-        }
-        return 0.5 * (lo + hi);
+        return s;
+    }
+
+    private static double clamp(double v, double lo, double hi) {
+        return v < lo ? lo : v > hi ? hi : v;
     }
 
     private static double distanceToSegment(double px, double py, double pz, Segment b, double lb) {
