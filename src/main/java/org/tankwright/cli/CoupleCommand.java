@@ -192,6 +192,9 @@ public final class CoupleCommand implements Callable<Integer> {
         if (gapSweep == null && offsetSweep == null) {
             return List.of();
         }
+        if (gapSweep == null && Double.isNaN(dist)) {
+            throw new ExitCodes.UserError(ExitCodes.USAGE, "--offset-sweep needs --gap, --distance or --gap-sweep");
+        }
         double[] gaps = gapSweep == null ? new double[] {link.gapForDistance(dist)} : range("--gap-sweep", gapSweep);
         double[] offs = offsetSweep == null ? new double[] {Math.hypot(dx, dy)} : range("--offset-sweep", offsetSweep);
         for (double g : gaps) {

@@ -53,7 +53,10 @@ public final class CoupledCoils {
     private static final String SPECTRAL = "spectral filament sum (Hankel transform)";
     private static final String SOURCE = "Maxwell (1873) §701 coaxial rings; Grover (1946) ch. 13 and Babic et al., "
             + "IEEE Trans. Magn. 46(9) 2010 for offset rings; Neumann integral with Grover's straight-filament "
-            + "formulas (1946) for segments; Smythe, Static and Dynamic Electricity §7.13-7.14, for the spectral form";
+            + "formulas (1946) for segments";
+    private static final String SPECTRAL_SOURCE = "Smythe, Static and Dynamic Electricity §7.13-7.14 (Hankel transform of "
+            + "the ring's vector potential; equivalent to Maxwell's and Grover's ring formulas)";
+    private static final String IMAGE_SOURCE = "; images: Smythe §7.18";
 
     private final Coil coilA;
     private final Coil coilB;
@@ -182,7 +185,8 @@ public final class CoupledCoils {
             valid = false;
         }
         String model = (spectral != null ? SPECTRAL : MODEL) + (plates ? " with plate images" : "");
-        return new CouplingResult(gap, distance, dx, dy, mutual, k, la, lb, new Provenance(model, SOURCE, valid, notes));
+        String source = (spectral != null ? SPECTRAL_SOURCE : SOURCE) + (plates ? IMAGE_SOURCE : "");
+        return new CouplingResult(gap, distance, dx, dy, mutual, k, la, lb, new Provenance(model, source, valid, notes));
     }
 
     /** Adds the image series' M and self terms into values; false when the series had to be cut. */
