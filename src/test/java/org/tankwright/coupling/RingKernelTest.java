@@ -26,6 +26,25 @@ class RingKernelTest {
     }
 
     @Test
+    void closeCoaxialRingsMatchMaxwellsSeries() {
+        // Maxwell's series for two close coaxial circles (A Dynamical Theory of the Electromagnetic Field,
+        // Phil. Trans. 155, 1865, §112), to second order, in SI with c = a1 − a and r² = c² + b²:
+        // M = µ0 a [ln(8a/r)(1 + c/(2a) + (3b² + c²)/(16a²)) − (2 + c/(2a) + (b² − 3c²)/(16a²))]
+        double a = 0.1;
+        double[][] cases = {{0.098, 0.003, 1e-5}, {0.102, 0.003, 1e-5}, {0.1, 0.005, 1e-5}, {0.095, 0.01, 2e-4}};
+        for (double[] t : cases) {
+            double a1 = t[0];
+            double b = t[1];
+            double c = a1 - a;
+            double r = Math.hypot(c, b);
+            double series = Constants.MU0 * a * (Math.log(8 * a / r) * (1 + c / (2 * a) + (3 * b * b + c * c) / (16 * a * a))
+                    - (2 + c / (2 * a) + (b * b - 3 * c * c) / (16 * a * a)));
+            double m = RingKernel.coaxial(a, a1, b);
+            assertEquals(series, m, t[2] * m, "Maxwell 1865 series, a1 = " + a1 + ", b = " + b);
+        }
+    }
+
+    @Test
     void offsetRingsMatchNeumann() {
         // r1, r2, dz, lateral — including the primary axis passing through the secondary (lateral = r2)
         double[][] cases = {{0.1, 0.1, 0.05, 0.03}, {0.1, 0.05, 0.02, 0.05}, {0.1, 0.1, 0.02, 0.15},
