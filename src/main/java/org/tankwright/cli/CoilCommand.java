@@ -115,7 +115,7 @@ public final class CoilCommand implements Callable<Integer> {
     Conductor conductor(ConductorMaterial metal) {
         String w = wire.strip();
         String lower = w.toLowerCase(Locale.ROOT);
-        double outer = CliSupport.quantity("--wire-outer", wireOuter, Dimension.LENGTH, Double.NaN);
+        double outer = wireOuter == null ? Double.NaN : len("--wire-outer", wireOuter);
         if (WireGauge.looksLikeAwg(w)) {
             int gauge;
             try {
@@ -136,7 +136,7 @@ public final class CoilCommand implements Callable<Integer> {
             } catch (NumberFormatException e) {
                 throw new ExitCodes.UserError(ExitCodes.USAGE, "--wire: '" + parts[0] + "' is not a whole strand count, e.g. litz:400x0.071mm");
             }
-            double ds = CliSupport.quantity("--wire (strand diameter)", parts[1], Dimension.LENGTH);
+            double ds = len("--wire (strand diameter)", parts[1]);
             if (Double.isNaN(outer)) {
                 outer = Math.sqrt(Math.max(strands, 0) / DEFAULT_LITZ_FILL) * ds;
             }
@@ -144,21 +144,21 @@ public final class CoilCommand implements Callable<Integer> {
         }
         if (lower.startsWith("tube:")) {
             String[] parts = twoParts(w.substring(5), "tube:OUTER/WALL, e.g. tube:6mm/1mm");
-            return new Conductor.Tube(CliSupport.quantity("--wire (tube outer diameter)", parts[0], Dimension.LENGTH),
-                    CliSupport.quantity("--wire (tube wall)", parts[1], Dimension.LENGTH), metal);
+            return new Conductor.Tube(len("--wire (tube outer diameter)", parts[0]),
+                    len("--wire (tube wall)", parts[1]), metal);
         }
         if (lower.startsWith("trace:")) {
             String[] parts = twoParts(w.substring(6), "trace:WIDTH/COPPER, e.g. trace:2mm/1oz or trace:2mm/35um");
-            double tw = CliSupport.quantity("--wire (trace width)", parts[0], Dimension.LENGTH);
+            double tw = len("--wire (trace width)", parts[0]);
             String copper = parts[1].strip();
             if (copper.toLowerCase(Locale.ROOT).endsWith("oz")) {
                 double oz = CliSupport.quantity("--wire (copper weight)", copper.substring(0, copper.length() - 2),
                         Dimension.DIMENSIONLESS);
                 return Conductor.Trace.ofCopperWeight(tw, oz, metal);
             }
-            return new Conductor.Trace(tw, CliSupport.quantity("--wire (copper thickness)", copper, Dimension.LENGTH), metal);
+            return new Conductor.Trace(tw, len("--wire (copper thickness)", copper), metal);
         }
-        double d = CliSupport.quantity("--wire", w, Dimension.LENGTH);
+        double d = len("--wire", w);
         return new Conductor.RoundWire(d, Double.isNaN(outer) ? d : outer, metal);
     }
 

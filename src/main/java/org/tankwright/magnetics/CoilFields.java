@@ -34,6 +34,49 @@ final class CoilFields {
         return segments(filaments, normalOnly, rotationalSymmetry);
     }
 
+    /**
+     * Multilayer solenoid by layer pairs: the field of layer j2's turn i2 at layer j1's turn i1 depends
+     * only on i1 − i2, so each pair of layers needs n1 + n2 − 1 field evaluations.
+     */
+    static double multilayer(MultilayerSolenoid m) {
+        double[] b = new double[2];
+        double p = m.pitch();
+        int layers = m.layers();
+        double sum = 0;
+        for (int j1 = 0; j1 < layers; j1++) {
+            int n1 = m.turnsInLayer(j1);
+            double r1 = m.layerRadius(j1);
+            double[] br = new double[n1];
+            double[] bz = new double[n1];
+            for (int j2 = 0; j2 < layers; j2++) {
+                int n2 = m.turnsInLayer(j2);
+                double r2 = m.layerRadius(j2);
+                double shift = m.turnZ(j1, 0) - m.turnZ(j2, 0);
+                int offset = n2 - 1;
+                double[] fr = new double[n1 + n2 - 1];
+                double[] fz = new double[n1 + n2 - 1];
+                for (int d = -(n2 - 1); d <= n1 - 1; d++) {
+                    if (j1 == j2 && d == 0) {
+                        continue; // a turn's own field is the skin effect, not proximity
+                    }
+                    MutualKernels.ringField(r2, r1, shift + d * p, b);
+                    fr[d + offset] = b[0];
+                    fz[d + offset] = b[1];
+                }
+                for (int i1 = 0; i1 < n1; i1++) {
+                    for (int i2 = 0; i2 < n2; i2++) {
+                        br[i1] += fr[i1 - i2 + offset];
+                        bz[i1] += fz[i1 - i2 + offset];
+                    }
+                }
+            }
+            for (int i1 = 0; i1 < n1; i1++) {
+                sum += 2 * Math.PI * r1 * (br[i1] * br[i1] + bz[i1] * bz[i1]) / (Constants.MU0 * Constants.MU0);
+            }
+        }
+        return sum;
+    }
+
     private static double rings(List<Filament> f, boolean normalOnly) {
         int n = f.size();
         double[] b = new double[2];

@@ -61,6 +61,9 @@ public sealed interface CoilGeometry
         return 2 * outerRadius();
     }
 
+    /** Centre-to-centre distance of neighbouring turns, m: axial for solenoids, radial for spirals, 0 for one turn. */
+    double turnPitch();
+
     /** Length of conductor in the winding (leads excluded), m. */
     double wireLength();
 

@@ -47,8 +47,9 @@ public final class CoilModel {
             }
         }
         this.spread = hi >= lo ? (hi - lo) / chosen.inductance() : 0.0;
-        this.fieldSum = CoilFields.weightedFieldSquared(filaments, geometry.conductor(),
-                geometry instanceof PolygonSpiral p ? p.sides() : 1);
+        this.fieldSum = geometry instanceof MultilayerSolenoid m ? CoilFields.multilayer(m)
+                : CoilFields.weightedFieldSquared(filaments, geometry.conductor(),
+                        geometry instanceof PolygonSpiral p ? p.sides() : 1);
         this.wireLength = geometry.wireLength();
         this.selfCapacitance = capacitance(geometry, filaments);
     }

@@ -69,4 +69,9 @@ public record FlatSpiral(double outerDiameter, double innerDiameter, int turns, 
         }
         return sum;
     }
+
+    @Override
+    public double turnPitch() {
+        return pitch();
+    }
 }

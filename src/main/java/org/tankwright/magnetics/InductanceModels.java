@@ -15,7 +15,7 @@ final class InductanceModels {
         if (g instanceof SingleLayerSolenoid s) {
             solenoid(s, out);
         } else if (g instanceof MultilayerSolenoid m) {
-            out.add(filament(FilamentSum.selfInductance(filaments), "filament", ringSource()));
+            out.add(filament(FilamentSum.multilayer(m), "filament", ringSource()));
             double a = m.meanRadius();
             double b = m.windingLength();
             double c = m.windingDepth();

@@ -51,6 +51,11 @@ public record MultilayerSolenoid(double formerDiameter, int turns, int layers, d
         return Math.max(0, Math.min(per, turns - j * per));
     }
 
+    /** Axial position of turn i of layer j (each layer's turns centred on z = 0), m. */
+    public double turnZ(int j, int i) {
+        return (i - 0.5 * (turnsInLayer(j) - 1)) * pitch;
+    }
+
     @Override
     public String kind() {
         return "multilayer";
@@ -85,7 +90,7 @@ public record MultilayerSolenoid(double formerDiameter, int turns, int layers, d
         for (int j = 0; j < layers; j++) {
             int n = turnsInLayer(j);
             for (int i = 0; i < n; i++) {
-                f.add(new Ring(0, 0, (i - 0.5 * (n - 1)) * pitch, layerRadius(j), a));
+                f.add(new Ring(0, 0, turnZ(j, i), layerRadius(j), a));
             }
         }
         return List.copyOf(f);
@@ -113,5 +118,10 @@ public record MultilayerSolenoid(double formerDiameter, int turns, int layers, d
     /** Human-readable note of the build, e.g. for tables. */
     public String build() {
         return layers + " layers x " + turnsPerLayer() + " turns, depth " + Checks.m(windingDepth());
+    }
+
+    @Override
+    public double turnPitch() {
+        return pitch;
     }
 }

@@ -92,4 +92,9 @@ public record PolygonSpiral(int sides, double outerAcrossFlats, double innerAcro
         }
         return sum;
     }
+
+    @Override
+    public double turnPitch() {
+        return pitch();
+    }
 }

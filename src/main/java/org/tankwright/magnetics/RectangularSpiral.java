@@ -80,4 +80,9 @@ public record RectangularSpiral(double outerWidth, double outerHeight, double in
         }
         return sum;
     }
+
+    @Override
+    public double turnPitch() {
+        return pitch();
+    }
 }

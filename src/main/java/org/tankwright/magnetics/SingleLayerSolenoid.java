@@ -75,4 +75,9 @@ public record SingleLayerSolenoid(double meanDiameter, int turns, double pitch, 
     public double wireLength() {
         return turns * Math.hypot(Math.PI * meanDiameter, pitch);
     }
+
+    @Override
+    public double turnPitch() {
+        return pitch;
+    }
 }

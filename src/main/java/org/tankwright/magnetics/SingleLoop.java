@@ -48,4 +48,9 @@ public record SingleLoop(double meanDiameter, Conductor conductor) implements Co
     public double wireLength() {
         return Math.PI * meanDiameter;
     }
+
+    @Override
+    public double turnPitch() {
+        return 0.0;
+    }
 }

@@ -51,6 +51,8 @@ class GeometryTest {
         assertEquals(-s.zMax(), s.zMin(), 0);
         assertEquals(10.55e-3, s.outerRadius(), 1e-15);
         assertEquals(8e-3, s.length(), 1e-15);
+        assertEquals(2e-3, s.turnPitch(), 0);
+        assertEquals(0.0, new SingleLoop(0.1, WIRE).turnPitch(), 0);
         assertEquals(4 * Math.hypot(Math.PI * 20e-3, 2e-3), s.wireLength(), 1e-15);
     }
 
@@ -60,6 +62,7 @@ class GeometryTest {
         FlatSpiral s = new FlatSpiral(50e-3, 10e-3, 10, WIRE);
         assertTrue(s.problems().isEmpty(), s.problems().toString());
         assertEquals(2.1e-3, s.pitch(), 1e-15);
+        assertEquals(s.pitch(), s.turnPitch(), 0);
         assertEquals(25e-3 - 0.55e-3, ((Ring) s.filaments().get(0)).radius(), 1e-15);
         assertEquals(5e-3 + 0.55e-3, ((Ring) s.filaments().get(9)).radius(), 1e-15);
         assertEquals(0.55e-3, s.zMax(), 1e-15);

@@ -78,12 +78,20 @@ class InductanceModelsTest {
         assertTrue(previous < 1e-3, "gap at N=1600: " + previous);
     }
 
-    /** The symmetric solenoid sum and the general O(N²) filament sum give the same inductance. */
+    /** The symmetry shortcuts (solenoid, multilayer layer pairs, polygon rotation) equal the general O(N²) sums. */
     @Test
     void solenoidShortcutEqualsGeneralFilamentSum() {
         SingleLayerSolenoid s = new SingleLayerSolenoid(30e-3, 17, 1.5e-3,
                 Conductor.RoundWire.bare(1e-3, ConductorMaterial.COPPER));
         assertEquals(FilamentSum.selfInductance(s.filaments()), find(CoilModel.of(s), "filament"), 1e-12 * 1e-5);
+        for (int[] c : new int[][] {{100, 5}, {10, 3}, {7, 7}}) {
+            MultilayerSolenoid m = MultilayerSolenoid.closeWound(20e-3, c[0], c[1],
+                    new Conductor.RoundWire(1e-3, 1.1e-3, ConductorMaterial.COPPER));
+            double general = FilamentSum.selfInductance(m.filaments());
+            assertEquals(general, FilamentSum.multilayer(m), 1e-12 * general, "multilayer " + c[0] + "/" + c[1]);
+            double field = CoilFields.weightedFieldSquared(m.filaments(), m.conductor(), 1);
+            assertEquals(field, CoilFields.multilayer(m), 1e-12 * field, "multilayer field " + c[0] + "/" + c[1]);
+        }
         PolygonSpiral p = new PolygonSpiral(6, 40e-3, 10e-3, 5,
                 Conductor.Trace.ofCopperWeight(1e-3, 1, ConductorMaterial.COPPER));
         double general = FilamentSum.selfInductance(p.filaments());
