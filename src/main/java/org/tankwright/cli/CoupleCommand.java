@@ -5,8 +5,9 @@ import org.tankwright.coupling.CoupledCoils;
 import org.tankwright.coupling.CouplingRange;
 import org.tankwright.coupling.CouplingResult;
 import org.tankwright.coupling.CouplingSweep;
+import org.tankwright.coupling.ShieldLoss;
 import org.tankwright.magnetics.CoilGeometry;
-import org.tankwright.magnetics.FilamentSum;
+import org.tankwright.magnetics.CoilModel;
 import org.tankwright.units.Dimension;
 import org.tankwright.units.Quantities;
 import picocli.CommandLine.Command;
@@ -110,14 +111,34 @@ public final class CoupleCommand implements Callable<Integer> {
         List<CouplingResult> sweep = sweep(link, dist, dx, dy);
         OptionalDouble nul = findNull && at != null ? CouplingSweep.nullOffset(link, at.gap(), 0, 2 * link.radiusSum()) : OptionalDouble.empty();
         CouplingRange range = envelope == null ? null : envelope(link);
+        Map<String, ShieldLoss.Result> shields = shields(link);
         if (csv) {
             printCsv(sweep.isEmpty() && at != null ? List.of(at) : sweep);
         } else if (json) {
-            CliSupport.printJson(toJson(at, sweep, nul, range));
+            Map<String, Object> m = toJson(at, sweep, nul, range);
+            shields.forEach((c, r) -> m.put("shield_resistance_" + c + "_ohm", r.resistance()));
+            CliSupport.printJson(m);
         } else {
             printText(at, sweep, nul, range);
+            shields.forEach((c, r) -> {
+                System.out.printf("shield loss %s  %s in series with coil %s (skin depth %s)%n", c,
+                        Quantities.format(r.resistance(), Dimension.RESISTANCE, 3), c, fmt(r.skinDepth()));
+                r.provenance().notes().forEach(n -> System.out.println("note           " + n));
+            });
         }
         return ExitCodes.OK;
+    }
+
+    /** The eddy loss of each metal shield at its coil's operating frequency (--a-frequency, --b-frequency). */
+    private Map<String, ShieldLoss.Result> shields(CoupledCoils link) {
+        Map<String, ShieldLoss.Result> out = new LinkedHashMap<>();
+        try {
+            link.shieldLoss(true, coilA.frequency()).ifPresent(r -> out.put("a", r));
+            link.shieldLoss(false, coilB.frequency()).ifPresent(r -> out.put("b", r));
+        } catch (IllegalArgumentException e) {
+            throw new ExitCodes.UserError(ExitCodes.INVALID_INPUT, "shield loss: " + e.getMessage());
+        }
+        return out;
     }
 
     private CoupledCoils link() {
@@ -128,9 +149,9 @@ public final class CoupleCommand implements Callable<Integer> {
 
     private CoupledCoils.Coil coil(String name, CoilOptionSet options) {
         CoilGeometry g = options.geometry();
-        options.temperature();
-        options.frequency();
-        return new CoupledCoils.Coil(name, g.filaments(), FilamentSum.selfInductance(g.filaments()), plate(name), -g.zMin(), g.zMax());
+        // the coil model's chosen self-inductance (the most accurate valid model), as `tankwright coil` reports it
+        double l = CoilModel.of(g).inductance();
+        return new CoupledCoils.Coil(name, g.filaments(), l, plate(name), -g.zMin(), g.zMax());
     }
 
     private String plateText(String c, String o) {
@@ -170,6 +191,9 @@ public final class CoupleCommand implements Callable<Integer> {
     private List<CouplingResult> sweep(CoupledCoils link, double dist, double dx, double dy) {
         if (gapSweep == null && offsetSweep == null) {
             return List.of();
+        }
+        if (gapSweep == null && Double.isNaN(dist)) {
+            throw new ExitCodes.UserError(ExitCodes.USAGE, "--offset-sweep needs --gap, --distance or --gap-sweep");
         }
         double[] gaps = gapSweep == null ? new double[] {link.gapForDistance(dist)} : range("--gap-sweep", gapSweep);
         double[] offs = offsetSweep == null ? new double[] {Math.hypot(dx, dy)} : range("--offset-sweep", offsetSweep);

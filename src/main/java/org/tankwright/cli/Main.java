@@ -20,6 +20,8 @@ import picocli.CommandLine.Command;
                 FieldCommand.class,
                 CoilCommand.class,
                 CheckCommand.class,
+                CoupleCommand.class,
+                FieldCommand.class,
         })
 public final class Main implements Runnable {
 

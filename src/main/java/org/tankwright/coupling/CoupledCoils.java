@@ -53,7 +53,10 @@ public final class CoupledCoils {
     private static final String SPECTRAL = "spectral filament sum (Hankel transform)";
     private static final String SOURCE = "Maxwell (1873) §701 coaxial rings; Grover (1946) ch. 13 and Babic et al., "
             + "IEEE Trans. Magn. 46(9) 2010 for offset rings; Neumann integral with Grover's straight-filament "
-            + "formulas (1946) for segments; Smythe, Static and Dynamic Electricity §7.13-7.14, for the spectral form";
+            + "formulas (1946) for segments";
+    private static final String SPECTRAL_SOURCE = "Smythe, Static and Dynamic Electricity §7.13-7.14 (Hankel transform of "
+            + "the ring's vector potential; equivalent to Maxwell's and Grover's ring formulas)";
+    private static final String IMAGE_SOURCE = "; images: Smythe §7.18";
 
     private final Coil coilA;
     private final Coil coilB;
@@ -182,7 +185,8 @@ public final class CoupledCoils {
             valid = false;
         }
         String model = (spectral != null ? SPECTRAL : MODEL) + (plates ? " with plate images" : "");
-        return new CouplingResult(gap, distance, dx, dy, mutual, k, la, lb, new Provenance(model, SOURCE, valid, notes));
+        String source = (spectral != null ? SPECTRAL_SOURCE : SOURCE) + (plates ? IMAGE_SOURCE : "");
+        return new CouplingResult(gap, distance, dx, dy, mutual, k, la, lb, new Provenance(model, source, valid, notes));
     }
 
     /** Adds the image series' M and self terms into values; false when the series had to be cut. */
@@ -220,6 +224,19 @@ public final class CoupledCoils {
         notes.add("image method: plates taken as infinite planes; valid when each plate extends beyond its coil "
                 + "by more than the plate-to-plate distance");
         return valid;
+    }
+
+    /**
+     * Eddy loss of coil a's (or b's) metal shield at {@code frequency}, as a resistance in series with
+     * that coil ({@link ShieldLoss}); empty when that coil has no metal plate.
+     */
+    public java.util.Optional<ShieldLoss.Result> shieldLoss(boolean ofCoilA, double frequency) {
+        Coil c = ofCoilA ? coilA : coilB;
+        if (c.plate() == null || c.plate().material() != BackingPlate.Material.METAL) {
+            return java.util.Optional.empty();
+        }
+        double plane = ofCoilA ? aBottom - c.plate().spacing() : bTop + c.plate().spacing();
+        return java.util.Optional.of(ShieldLoss.addedResistance(ofCoilA ? a : b, plane, c.plate(), frequency));
     }
 
     /**

@@ -16,4 +16,17 @@ public record CouplingRange(double gapMin, double gapMax, double offsetMax, Coup
     public boolean containsNull() {
         return lowest.k() <= 0 && highest.k() >= 0;
     }
+
+    /** Smallest |k| over the envelope: 0 when a null lies inside it. */
+    public double smallestMagnitude() {
+        if (containsNull()) {
+            return 0;
+        }
+        return lowest.k() > 0 ? lowest.k() : -highest.k();
+    }
+
+    /** Largest |k| over the envelope. */
+    public double largestMagnitude() {
+        return Math.max(Math.abs(lowest.k()), Math.abs(highest.k()));
+    }
 }

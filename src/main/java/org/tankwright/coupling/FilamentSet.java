@@ -244,19 +244,12 @@ public final class FilamentSet {
      * weighted sum of every filament's Biot–Savart field.
      */
     public void fluxDensity(double px, double py, double pz, double[] out) {
-        double bx = 0;
-        double by = 0;
-        double bz = 0;
-        double[] tmp = new double[3];
+        out[0] = 0;
+        out[1] = 0;
+        out[2] = 0;
         for (int i = 0; i < rr.length; i++) {
-            RingKernel.fluxDensity(rr[i], px - rx[i], py - ry[i], pz - rz[i], tmp);
-            bx += rw[i] * tmp[0];
-            by += rw[i] * tmp[1];
-            bz += rw[i] * tmp[2];
+            RingKernel.addFluxDensity(rr[i], px - rx[i], py - ry[i], pz - rz[i], rw[i], out);
         }
-        out[0] = bx;
-        out[1] = by;
-        out[2] = bz;
         for (int i = 0; i < sw.length; i++) {
             int j = 6 * i;
             SegmentKernel.addFluxDensity(s[j], s[j + 1], s[j + 2], s[j + 3], s[j + 4], s[j + 5], px, py, pz, sw[i], out);

@@ -1,5 +1,6 @@
 package org.tankwright.coupling;
 
+import org.tankwright.magnetics.Elliptic;
 import org.tankwright.units.Constants;
 
 /**
@@ -167,6 +168,14 @@ public final class RingKernel {
      * written into out[0..2] (Smythe §7.10; Simpson et al., NASA/TM-2001-211264 give the same form).
      */
     public static void fluxDensity(double r, double x, double y, double z, double[] out) {
+        out[0] = 0;
+        out[1] = 0;
+        out[2] = 0;
+        addFluxDensity(r, x, y, z, 1, out);
+    }
+
+    /** Adds {@code weight} times the ring's flux density per ampere at (x, y, z) into out[0..2]. */
+    public static void addFluxDensity(double r, double x, double y, double z, double weight, double[] out) {
         double rho = Math.sqrt(x * x + y * y);
         double s = r + rho;
         double dd = s * s + z * z;
@@ -175,18 +184,15 @@ public final class RingKernel {
         if (q == 0 || m >= 1) {
             throw new IllegalArgumentException("field point lies on a ring filament");
         }
-        double kk = org.tankwright.magnetics.Elliptic.k(m);
-        double ee = org.tankwright.magnetics.Elliptic.e(m);
-        double c = Constants.MU0 / (2 * Math.PI) / Math.sqrt(dd);
-        double bz = c * (kk + (r * r - rho * rho - z * z) / q * ee);
-        out[2] = bz;
+        double kk = Elliptic.k(m);
+        double ee = Elliptic.e(m);
+        double c = weight * Constants.MU0 / (2 * Math.PI) / Math.sqrt(dd);
+        out[2] += c * (kk + (r * r - rho * rho - z * z) / q * ee);
         if (rho <= 1e-12 * r) {
-            out[0] = 0;
-            out[1] = 0;
             return;
         }
         double brho = c * z / rho * (-kk + (r * r + rho * rho + z * z) / q * ee);
-        out[0] = brho * x / rho;
-        out[1] = brho * y / rho;
+        out[0] += brho * x / rho;
+        out[1] += brho * y / rho;
     }
 }

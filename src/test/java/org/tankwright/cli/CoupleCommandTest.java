@@ -85,6 +85,10 @@ class CoupleCommandTest {
         assertTrue(r.out().contains("coupling null"), r.out());
         assertTrue(r.out().contains("a coupling null lies inside the envelope"), r.out());
         assertTrue(r.out().contains("with plate images"), r.out());
+        Run shield = run(with(TWO_LOOPS, "--gap", "10mm", "--b-plate", "metal", "--b-plate-spacing", "5mm", "--b-frequency", "100kHz", "--json"));
+        assertEquals(0, shield.status(), shield.err());
+        double ohm = JsonParser.parseString(shield.out()).getAsJsonObject().get("shield_resistance_b_ohm").getAsDouble();
+        assertTrue(ohm > 0 && ohm < 1, "added resistance " + ohm);
     }
 
     @Test

@@ -60,7 +60,8 @@ class CoupledCoilsTest {
             List<Filament> b = randomCoil(rnd);
             BackingPlate pa = randomPlate(rnd);
             BackingPlate pb = randomPlate(rnd);
-            CoupledCoils link = new CoupledCoils(TestCoils.coil("a", a, pa), TestCoils.coil("b", b, pb));
+            // every third placement through the filament-pair sums and image series instead of the spectral form
+            CoupledCoils link = new CoupledCoils(TestCoils.coil("a", a, pa), TestCoils.coil("b", b, pb), trial % 3 != 0);
             double gap = 0.0005 + rnd.nextDouble() * 0.1;
             double off = rnd.nextDouble() * 0.2;
             double ang = rnd.nextDouble() * 2 * Math.PI;
@@ -76,7 +77,11 @@ class CoupledCoilsTest {
         int turns = 1 + rnd.nextInt(8);
         double r0 = 0.01 + rnd.nextDouble() * 0.1;
         double pitch = 2 * wire + rnd.nextDouble() * 0.004;
-        return rnd.nextBoolean() ? TestCoils.spiral(turns, r0, pitch, wire) : TestCoils.solenoid(turns, r0, pitch, wire);
+        return switch (rnd.nextInt(3)) {
+            case 0 -> TestCoils.spiral(turns, r0, pitch, wire);
+            case 1 -> TestCoils.solenoid(turns, r0, pitch, wire);
+            default -> TestCoils.squareSpiral(Math.min(turns, 4), 2 * r0 + 2 * turns * pitch, pitch, wire);
+        };
     }
 
     private static BackingPlate randomPlate(Random rnd) {

@@ -7,9 +7,8 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * Benchmark (run by hand, not a test):
- * {@code mvn -q test-compile exec:java}-free form:
- * {@code java -cp target/classes:target/test-classes:<commons-math3.jar> org.tankwright.coupling.CouplingBench}.
+ * Benchmark (run by hand, not a test): after {@code mvn -q test-compile},
+ * {@code java -cp target/classes:target/test-classes:<commons-math3 jar> org.tankwright.coupling.CouplingBench}.
  * Reports the time of M for two 20-turn spirals with offset, the ratio to a direct Neumann
  * integration at equal accuracy (1e-6 relative), and the time of a 50 × 50 gap/offset map.
  */

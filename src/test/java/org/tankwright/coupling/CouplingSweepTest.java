@@ -47,6 +47,10 @@ class CouplingSweepTest {
         assertEquals(bruteMax, range.highest().k(), 1e-9, "largest k at the smallest gap, aligned");
         assertTrue(range.lowest().offset() > 0 && range.lowest().offset() < 0.3, "interior offset");
         assertTrue(range.containsNull());
+        assertEquals(0, range.smallestMagnitude(), 0);
+        assertEquals(Math.max(-range.lowest().k(), range.highest().k()), range.largestMagnitude(), 0);
+        CouplingRange near = CouplingSweep.range(link, 0.01, 0.05, 0.02);
+        assertTrue(!near.containsNull() && near.smallestMagnitude() == near.lowest().k(), "no null: smallest |k| = lowest k");
     }
 
     @Test

@@ -47,7 +47,23 @@ final class TestCoils {
         return sum;
     }
 
-    static CoupledCoils.Coil coil(String name, List<Filament> rings, BackingPlate plate) {
-        return new CoupledCoils.Coil(name, rings, selfInductance(rings), plate);
+    static CoupledCoils.Coil coil(String name, List<Filament> filaments, BackingPlate plate) {
+        boolean rings = filaments.stream().allMatch(f -> f instanceof Ring);
+        // segment coils: the coil model's segment sum (Grover's straight-filament self and mutual terms)
+        double l = rings ? selfInductance(filaments) : org.tankwright.magnetics.FilamentSum.selfInductance(filaments);
+        return new CoupledCoils.Coil(name, filaments, l, plate);
+    }
+
+    /** A flat square spiral of closed square turns (side from outerSide down by 2·pitch per turn) at z = 0. */
+    static List<Filament> squareSpiral(int turns, double outerSide, double pitch, double wireRadius) {
+        List<Filament> out = new ArrayList<>();
+        for (int t = 0; t < turns; t++) {
+            double h = outerSide / 2 - t * pitch;
+            double[][] p = {{-h, -h}, {h, -h}, {h, h}, {-h, h}, {-h, -h}};
+            for (int i = 0; i < 4; i++) {
+                out.add(new org.tankwright.magnetics.Segment(p[i][0], p[i][1], 0, p[i + 1][0], p[i + 1][1], 0, wireRadius));
+            }
+        }
+        return out;
     }
 }
