@@ -55,7 +55,10 @@ final class BankStage {
     static Chosen choose(String id, double target, double vRms, double iRms, double dcBias, double f, Design d) {
         BankStress stress = BankStress.sinusoidal(vRms, iRms, dcBias, f);
         BankRequest req = BankRequest.of(target, maxDeviation(d), stress);
-        BankSearchResult res = BankSynthesis.search(req, catalogue(d).parts());
+        // Tank capacitors carry the full circulating current: only dielectrics suited to resonant tanks
+        // (polypropylene film, C0G/NP0, mica) are considered (common practice).
+        List<CapacitorPart> suited = catalogue(d).parts().stream().filter(p -> p.dielectric().suitsResonantTank()).toList();
+        BankSearchResult res = BankSynthesis.search(req, suited);
         if (res.banks().isEmpty()) {
             return new Chosen(null, null, id + ": no bank of the catalogue's parts reaches "
                     + Quantities.format(target, Dimension.CAPACITANCE, 4) + " within the limits (" + res.bounds()

@@ -23,12 +23,31 @@ final class CouplingStage {
     /** Default resistivity of a shield when none is given: aluminium, 2.82·10⁻⁸ Ω·m (MODELS.md §1). */
     static final double ALUMINIUM_RESISTIVITY = 2.82e-8;
     static final int SWEEP_POINTS = 31;
+    /** Fewer sweep points for polygonal coils, whose coupling is a slower segment sum. */
+    static final int SWEEP_POINTS_POLYGON = 13;
+    /** Points per axis of the envelope grid. */
+    static final int GRID_POINTS = 5;
 
     private CouplingStage() {
     }
 
     /** The link's coupling, with the model when both coils have geometry, else from the entered values. */
-    record Linked(CoupledCoils model, CouplingReport report) {
+    record Linked(CoupledCoils model, CouplingReport report, EnvelopeGrid grid) {
+    }
+
+    /**
+     * The coupling solved on a grid over the envelope's distance × offset (offset along x), shared by the
+     * coupling range, the operating envelope and the envelope map.
+     */
+    record EnvelopeGrid(double[] distances, double[] offsets, CouplingResult[][] results) {
+        static EnvelopeGrid solve(CoupledCoils link, double dMin, double dMax, double offMax) {
+            double[] ds = CouplingSweep.linspace(dMin, dMax, dMax > dMin ? GRID_POINTS : 1);
+            double[] os = CouplingSweep.linspace(0, offMax, offMax > 0 ? GRID_POINTS : 1);
+            CouplingResult[][] r = new CouplingResult[ds.length][os.length];
+            java.util.stream.IntStream.range(0, ds.length * os.length).parallel()
+                    .forEach(idx -> r[idx / os.length][idx % os.length] = link.at(ds[idx / os.length], os[idx % os.length], 0));
+            return new EnvelopeGrid(ds, os, r);
+        }
     }
 
     static Linked couple(Design d, CoilStage.Analysed a, CoilStage.Analysed b, boolean full) {
@@ -51,7 +70,7 @@ final class CouplingStage {
             double k = m / Math.sqrt(la * lb);
             notes.add("coupling entered, not modelled: no sweeps against distance or offset");
             return new Linked(null, new CouplingReport(m, k, la, lb, source, Math.abs(k), Math.abs(k), "nominal",
-                    "nominal", Double.NaN, List.of(), notes));
+                    "nominal", Double.NaN, List.of(), notes), null);
         }
         CoupledCoils link = new CoupledCoils(coil("primary", a, false), coil("secondary", b, true));
         double distance = p.distance();
@@ -77,28 +96,41 @@ final class CouplingStage {
         String kMaxAt = "nominal placement";
         List<Series> sweeps = new ArrayList<>();
         double nullOffset = Double.NaN;
+        EnvelopeGrid grid = null;
         if (full) {
             double dMin = env != null && env.distanceMin() != null ? env.distanceMin() : distance;
             double dMax = env != null && env.distanceMax() != null ? env.distanceMax() : distance;
             double offMax = env != null && env.offsetMax() != null ? env.offsetMax() : 0.0;
             if (dMax > dMin || offMax > 0) {
-                CouplingRange range = CouplingSweep.range(link, link.gapForDistance(dMin), link.gapForDistance(dMax), offMax);
-                kMin = Math.abs(range.lowest().k());
-                kMax = Math.abs(range.highest().k());
-                kMinAt = where(range.lowest());
-                kMaxAt = where(range.highest());
-                if (kMin > kMax) {
-                    double t = kMin;
-                    kMin = kMax;
-                    kMax = t;
-                    String s = kMinAt;
-                    kMinAt = kMaxAt;
-                    kMaxAt = s;
+                grid = EnvelopeGrid.solve(link, dMin, dMax, offMax);
+                CouplingResult lo;
+                CouplingResult hi;
+                if (link.axisymmetric()) {
+                    // Round coils: the grid and a search through the envelope's interior.
+                    CouplingRange range = CouplingSweep.range(link, link.gapForDistance(dMin), link.gapForDistance(dMax), offMax);
+                    lo = range.lowest();
+                    hi = range.highest();
+                } else {
+                    lo = grid.results()[0][0];
+                    hi = lo;
+                    for (CouplingResult[] row : grid.results()) {
+                        for (CouplingResult r : row) {
+                            lo = Math.abs(r.k()) < Math.abs(lo.k()) ? r : lo;
+                            hi = Math.abs(r.k()) > Math.abs(hi.k()) ? r : hi;
+                        }
+                    }
+                    notes.add("coupling range of the polygonal coils from a " + GRID_POINTS + " × " + GRID_POINTS
+                            + " grid over the envelope's distance and offset (along x)");
                 }
+                kMin = Math.min(Math.abs(lo.k()), Math.abs(hi.k()));
+                kMax = Math.max(Math.abs(lo.k()), Math.abs(hi.k()));
+                kMinAt = where(Math.abs(lo.k()) <= Math.abs(hi.k()) ? lo : hi);
+                kMaxAt = where(Math.abs(lo.k()) <= Math.abs(hi.k()) ? hi : lo);
             }
             double sweepMin = Math.max(link.distanceForGap(0) * 1.0001, Math.min(dMin, distance) * 0.5);
             double sweepMax = Math.max(dMax, distance) * 2.0;
-            double[] ds = CouplingSweep.linspace(sweepMin, sweepMax, SWEEP_POINTS);
+            int points = link.axisymmetric() ? SWEEP_POINTS : SWEEP_POINTS_POLYGON;
+            double[] ds = CouplingSweep.linspace(sweepMin, sweepMax, points);
             double[] gaps = new double[ds.length];
             for (int i = 0; i < ds.length; i++) {
                 gaps[i] = link.gapForDistance(ds[i]);
@@ -106,7 +138,7 @@ final class CouplingStage {
             List<CouplingResult> overGap = CouplingSweep.overGap(link, gaps, p.offsetX(), p.offsetY());
             addSweeps(sweeps, "distance", "axial distance", overGap, true, distance);
             double offsetSpan = Math.max(offMax * 1.5, 1.2 * link.radiusSum());
-            double[] offs = CouplingSweep.linspace(0, offsetSpan, SWEEP_POINTS);
+            double[] offs = CouplingSweep.linspace(0, offsetSpan, points);
             List<CouplingResult> overOffset = CouplingSweep.overOffset(link, link.gapForDistance(distance), offs, 0.0);
             addSweeps(sweeps, "offset", "lateral offset", overOffset, false, Math.hypot(p.offsetX(), p.offsetY()));
             OptionalDouble nul = CouplingSweep.nullOffset(link, link.gapForDistance(distance), 0.0, offsetSpan);
@@ -114,7 +146,7 @@ final class CouplingStage {
         }
         return new Linked(link, new CouplingReport(nominal.mutual(), kNominal, l1, l2,
                 nominal.provenance().model() + " (" + nominal.provenance().source() + ")", kMin, kMax, kMinAt,
-                kMaxAt, nullOffset, List.copyOf(sweeps), List.copyOf(notes)));
+                kMaxAt, nullOffset, List.copyOf(sweeps), List.copyOf(notes)), grid);
     }
 
     private static String where(CouplingResult r) {

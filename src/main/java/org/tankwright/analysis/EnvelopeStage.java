@@ -11,7 +11,7 @@ import org.tankwright.coupling.CouplingSweep;
 import org.tankwright.design.Design;
 import org.tankwright.design.Envelope;
 import org.tankwright.tuning.ControlSpec;
-import org.tankwright.tuning.CouplingPath;
+import org.tankwright.tuning.CouplingSurface;
 import org.tankwright.tuning.CouplingPoint;
 import org.tankwright.tuning.EnvelopeResult;
 import org.tankwright.tuning.EnvelopeSpec;
@@ -23,7 +23,6 @@ import org.tankwright.units.Dimension;
 import org.tankwright.units.Quantities;
 
 import java.util.ArrayList;
-import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
 
@@ -33,7 +32,6 @@ import java.util.Map;
  * map of efficiency over distance × offset.
  */
 final class EnvelopeStage {
-    static final int MAP_POINTS = 7;
 
     private EnvelopeStage() {
     }
@@ -50,22 +48,20 @@ final class EnvelopeStage {
         double dMin = env.distanceMin() != null ? env.distanceMin() : distance;
         double dMax = env.distanceMax() != null ? env.distanceMax() : distance;
         double offMax = env.offsetMax() != null ? env.offsetMax() : 0.0;
-        CoupledCoils model = linked.model();
-        CouplingPath path;
-        List<CouplingPoint> points = new ArrayList<>();
-        if (model != null && Double.isFinite(dMin) && (dMax > dMin || offMax > 0)) {
-            for (double dd : CouplingSweep.linspace(dMin, dMax, dMax > dMin ? 4 : 1)) {
-                for (double off : CouplingSweep.linspace(0, offMax, offMax > 0 ? 4 : 1)) {
-                    CouplingResult r = model.at(dd, off, 0);
-                    if (Math.abs(r.mutual()) > 0) {
-                        points.add(new CouplingPoint(Math.abs(r.mutual()), r.inductanceA(), r.inductanceB()));
-                    }
+        CouplingSurface surface;
+        CouplingStage.EnvelopeGrid grid = linked == null ? null : linked.grid();
+        if (grid != null) {
+            CouplingResult[][] rs = grid.results();
+            CouplingPoint[][] table = new CouplingPoint[rs.length][rs[0].length];
+            for (int i = 0; i < rs.length; i++) {
+                for (int j = 0; j < rs[i].length; j++) {
+                    table[i][j] = new CouplingPoint(rs[i][j].mutual(), rs[i][j].inductanceA(), rs[i][j].inductanceB());
                 }
             }
-            points.sort(Comparator.comparingDouble(CouplingPoint::k));
-            path = points.size() > 1 ? CouplingPath.table(points) : CouplingPath.fixed(nominalPoint(ld));
+            surface = CouplingSurface.table(table);
         } else {
-            path = CouplingPath.fixed(nominalPoint(ld));
+            CouplingPoint p = new CouplingPoint(ld.coils().m(), ld.coils().l1(), ld.coils().l2());
+            surface = (s, t) -> p;
         }
         Load load = ld.load();
         double nomLoad = load instanceof Load.Battery b ? b.volts() : load instanceof Load.Resistor r ? r.ohms()
@@ -83,8 +79,8 @@ final class EnvelopeStage {
         double target = d.load().targetPower() != null ? d.load().targetPower() : nominal.pOut();
         ControlSpec control = new ControlSpec(duty ? ControlSpec.Knob.DUTY : ControlSpec.Knob.AMPLITUDE,
                 ControlSpec.Quantity.OUTPUT_POWER, target, src.value());
-        EnvelopeSpec spec = new EnvelopeSpec(path, loadMin, loadMax, fMin, fMax, tMin, tMax, EnvelopeSpec.COPPER_ALPHA,
-                tRef, control, 5, EnvelopeSpec.DEFAULT_TRIP_MARGIN);
+        EnvelopeSpec spec = EnvelopeSpec.of(surface, loadMin, loadMax, f, control).withFrequencyRange(fMin, fMax)
+                .withTemperatureRange(tMin, tMax).withResistanceTemperature(tRef, EnvelopeSpec.COPPER_ALPHA).withGrid(5);
         EnvelopeResult r;
         try {
             r = OperatingEnvelope.evaluate(tuned, spec);
@@ -110,29 +106,22 @@ final class EnvelopeStage {
                 open = fault.unbounded() ? Double.POSITIVE_INFINITY : fault.vOutHeld();
             }
         }
-        EnvelopeReport.EnvelopeMap map = model == null || !(dMax > dMin || offMax > 0) ? null
-                : efficiencyMap(tuned, model, dMin, dMax, offMax);
+        EnvelopeReport.EnvelopeMap map = grid == null ? null : efficiencyMap(tuned, grid);
         return new EnvelopeReport(r.grid().size(), List.copyOf(worst), r.trip().primaryOverCurrent(),
                 r.trip().outputOverVoltage(), List.copyOf(unreachable), removed, open, map);
     }
 
-    private static CouplingPoint nominalPoint(LinkDesign ld) {
-        return new CouplingPoint(ld.coils().m(), ld.coils().l1(), ld.coils().l2());
-    }
-
-    /** Efficiency at fixed drive and capacitors over distance × offset. */
-    private static EnvelopeReport.EnvelopeMap efficiencyMap(TuningResult tuned, CoupledCoils model, double dMin,
-                                                           double dMax, double offMax) {
+    /** Efficiency at fixed drive and capacitors over the envelope grid of distance × offset. */
+    private static EnvelopeReport.EnvelopeMap efficiencyMap(TuningResult tuned, CouplingStage.EnvelopeGrid grid) {
         LinkDesign ld = tuned.design();
-        double[] ds = CouplingSweep.linspace(dMin, dMax, MAP_POINTS);
-        double[] os = CouplingSweep.linspace(0, Math.max(offMax, 1e-6), MAP_POINTS);
-        double[][] v = new double[ds.length][os.length];
+        CouplingResult[][] rs = grid.results();
+        double[][] v = new double[rs.length][rs[0].length];
         PhasorSolver s = tuned.newSolver();
         int l1 = s.indexOf(Topologies.L1);
         int l2 = s.indexOf(Topologies.L2);
-        for (int i = 0; i < ds.length; i++) {
-            for (int j = 0; j < os.length; j++) {
-                CouplingResult c = model.at(ds[i], os[j], 0);
+        for (int i = 0; i < rs.length; i++) {
+            for (int j = 0; j < rs[i].length; j++) {
+                CouplingResult c = rs[i][j];
                 s.setInductance(l1, c.inductanceA());
                 s.setInductance(l2, c.inductanceB());
                 s.setMutual(0, c.mutual());
@@ -140,7 +129,8 @@ final class EnvelopeStage {
                 v[i][j] = op.efficiency();
             }
         }
-        return new EnvelopeReport.EnvelopeMap("efficiency at the nominal drive", ds, os, v);
+        return new EnvelopeReport.EnvelopeMap("efficiency at the nominal drive", grid.distances().clone(),
+                grid.offsets().clone(), v);
     }
 
     static String element(String key) {

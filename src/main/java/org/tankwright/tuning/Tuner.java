@@ -52,9 +52,19 @@ public final class Tuner {
         double cText = TextbookCompensation.c1(d.topology(), d.coils(), w, 0);
         double c = d.c1() > 0 ? d.c1() : cText;
         PhasorSolver s = new PhasorSolver(network(d, c, 0, 0));
+        PhaseSolve phase = null;
+        List<String> notes = new ArrayList<>();
+        if (d.c1() <= 0 && d.targetPhase() != 0) {
+            // A bridge-driven tank is tuned a little inductive so the bridge switches at zero voltage.
+            phase = ZeroPhaseSolver.solve(s, d.frequency(), d.targetPhase(), cText);
+            c = phase.c1();
+            if (!phase.reached()) {
+                notes.add("target phase " + d.targetPhase() + "° not reachable by C alone: " + phase.note());
+            }
+        }
         OperatingPoint op = OperatingPoint.of(s, d.topology(), d.source(), d.load(), d.frequency(), d.parts());
         double[] zpf = Bifurcation.zeroPhaseFrequencies(s, d.frequency());
-        return new TuningResult(d, c, 0, cText, 0, null, op, zpf, null, null, null, null, List.of());
+        return new TuningResult(d, c, 0, cText, 0, phase, op, zpf, null, null, null, null, notes);
     }
 
     private static TuningResult tuneLink(LinkDesign d, boolean thresholds) {
