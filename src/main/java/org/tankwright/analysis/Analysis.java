@@ -51,12 +51,13 @@ public final class Analysis {
         CouplingReport coupling = null;
         CouplingStage.Linked linked = null;
         HeaterReport heater = null;
+        HeaterStage.Heated heated = null;
         TuningResult tuned;
         List<BankReport> banks = new ArrayList<>();
         if (d.kind() == DesignKind.HEATER) {
-            HeaterStage.Heated h = HeaterStage.solve(d, primary);
-            heater = h.report();
-            tuned = h.cold();
+            heated = HeaterStage.solve(d, primary);
+            heater = heated.report();
+            tuned = heated.cold();
         } else if (d.isLink()) {
             CoilStage.Analysed secondary = CoilStage.analyse("secondary", d.secondary(), f, "$.secondary");
             coils.add(secondary.report());
@@ -66,17 +67,21 @@ public final class Analysis {
                     primary.report().resistanceAc(), secondary.report().resistanceAc());
             tuned = NetworkStage.tune(NetworkStage.linkDesign(d, f, values, fixed(d.compensation().c1()),
                     fixed(d.compensation().c2())));
-            tuned = withBanks(d, tuned, banks, notes, full);
+            // Banks are sized for the worst stress over the envelope when it is solved, else for the operating point.
+            EnvelopeReport first = full && EnvelopeStage.applies(d) ? EnvelopeStage.link(d, tuned, linked) : null;
+            tuned = withBanks(d, tuned, first, banks, notes, full);
         } else {
             LinkValues values = LinkValues.tank(primary.report().inductance(), primary.report().resistanceAc());
             tuned = NetworkStage.tune(NetworkStage.linkDesign(d, f, values, fixed(d.compensation().c1()), 0));
-            tuned = withBanks(d, tuned, banks, notes, false);
+            tuned = withBanks(d, tuned, null, banks, notes, false);
         }
-        if (d.kind() == DesignKind.HEATER && BankStage.enabled(d)) {
-            addBank(d, tuned.operatingPoint(), "C1", tuned.c1(), banks, notes);
+        if (heated != null && BankStage.enabled(d)) {
+            // The heater's tank capacitor is sized for the worse of its cold and hot points.
+            addBank(d, tuned.operatingPoint(), EnvelopeStage.heater(heated, d), "C1", tuned.c1(), banks, notes);
         }
         NetworkReport network = NetworkStage.report(tuned, full);
-        EnvelopeReport envelope = full && EnvelopeStage.applies(d) ? EnvelopeStage.link(d, tuned, linked) : null;
+        EnvelopeReport envelope = full && EnvelopeStage.applies(d) ? EnvelopeStage.link(d, tuned, linked)
+                : heated != null ? EnvelopeStage.heater(heated, d) : null;
         OperatingPoint op = tuned.operatingPoint();
         List<ElementStress> stresses = StressStage.rows(op, envelope, banks, d.kind() == DesignKind.HEATER);
         ExposureReport exposure = d.isLink() ? ExposureStage.link(d, tuned, linked)
@@ -93,15 +98,15 @@ public final class Analysis {
     }
 
     /** Chooses real banks for the tuned capacitors and solves the network again with their real C, ESR and ESL. */
-    private static TuningResult withBanks(Design d, TuningResult tuned, List<BankReport> banks, List<String> notes,
-                                          boolean thresholds) {
+    private static TuningResult withBanks(Design d, TuningResult tuned, EnvelopeReport envelope, List<BankReport> banks,
+                                          List<String> notes, boolean thresholds) {
         if (!BankStage.enabled(d)) {
             return thresholds ? NetworkStage.tune(tuned.design(), true) : tuned;
         }
         OperatingPoint op = tuned.operatingPoint();
         boolean link = tuned.design().topology().isLink();
-        BankStage.Chosen c1 = addBank(d, op, "C1", tuned.c1(), banks, notes);
-        BankStage.Chosen c2 = link ? addBank(d, op, "C2", tuned.c2(), banks, notes) : null;
+        BankStage.Chosen c1 = addBank(d, op, envelope, "C1", tuned.c1(), banks, notes);
+        BankStage.Chosen c2 = link ? addBank(d, op, envelope, "C2", tuned.c2(), banks, notes) : null;
         if (c1 == null && c2 == null) {
             return thresholds ? NetworkStage.tune(tuned.design(), true) : tuned;
         }
@@ -118,10 +123,22 @@ public final class Analysis {
                 again.closedForm(), again.bifurcationLoads(), again.bifurcationCouplings(), again.notes());
     }
 
-    private static BankStage.Chosen addBank(Design d, OperatingPoint op, String id, double target,
-                                            List<BankReport> banks, List<String> notes) {
+    private static BankStage.Chosen addBank(Design d, OperatingPoint op, EnvelopeReport envelope, String id,
+                                            double target, List<BankReport> banks, List<String> notes) {
         org.tankwright.circuit.ElementStress s = op.stress(id);
-        BankStage.Chosen c = BankStage.choose(id, target, s.vRms(), s.iRms(), s.dcBias(), op.frequency(), d);
+        double vRms = s.vRms();
+        double iRms = s.iRms();
+        if (envelope != null) {
+            String e = id.toLowerCase(java.util.Locale.ROOT);
+            for (WorstCase w : envelope.worst()) {
+                if (w.quantity().equals("v_" + e + "_peak_V")) {
+                    vRms = Math.max(vRms, (w.value() - s.dcBias()) / Math.sqrt(2));
+                } else if (w.quantity().equals("i_" + e + "_A")) {
+                    iRms = Math.max(iRms, w.value());
+                }
+            }
+        }
+        BankStage.Chosen c = BankStage.choose(id, target, vRms, iRms, s.vRms(), s.iRms(), s.dcBias(), op.frequency(), d);
         if (c.report() == null) {
             notes.add(c.note());
             return null;

@@ -51,8 +51,14 @@ final class BankStage {
         return d.capacitors() == null ? 0.02 : d.capacitors().maxDeviation();
     }
 
-    /** Chooses a bank for capacitor {@code id} of capacitance {@code target} under the given rms stress. */
-    static Chosen choose(String id, double target, double vRms, double iRms, double dcBias, double f, Design d) {
+    /**
+     * Chooses a bank for capacitor {@code id} of capacitance {@code target} that survives the given rms stress
+     * (the worst over the envelope when known); the report gives each part's duty at the operating point,
+     * whose rms voltage and current are {@code vNominal} and {@code iNominal}, so that the checks can scale it
+     * to the envelope's worst point themselves.
+     */
+    static Chosen choose(String id, double target, double vRms, double iRms, double vNominal, double iNominal,
+                         double dcBias, double f, Design d) {
         BankStress stress = BankStress.sinusoidal(vRms, iRms, dcBias, f);
         BankRequest req = BankRequest.of(target, maxDeviation(d), stress);
         // Tank capacitors carry the full circulating current: only dielectrics suited to resonant tanks
@@ -66,6 +72,8 @@ final class BankStage {
         }
         CapacitorBank b = res.best();
         PartDuty w = b.worstDuty();
+        double kv = vRms > 0 ? Math.min(1, vNominal / vRms) : 1;
+        double ki = iRms > 0 ? Math.min(1, iNominal / iRms) : 1;
         CapacitorPart part = b.layout().part();
         List<String> alternatives = new ArrayList<>();
         for (int i = 1; i < res.banks().size() && i <= 3; i++) {
@@ -77,9 +85,16 @@ final class BankStage {
                 + " (" + b.layout().trimPosition().key() + ")";
         BankReport report = new BankReport(id, target, b.capacitance(), b.esr(), b.esl(), b.layout().series(),
                 b.layout().parallel(), partText, trim, b.partCount(), part.dielectric().description(),
-                part.dielectric().isClass2(), w.peakVoltage(), w.peakVoltageLimit(), w.currentRms(), w.currentLimit(),
-                w.dissipation(), w.srf(), w.dvdt(), w.dvdtLimit(), b.storedEnergy(), List.copyOf(alternatives),
+                part.dielectric().isClass2(), w.dcVoltage() + (w.peakVoltage() - w.dcVoltage()) * kv,
+                finiteOrNaN(w.peakVoltageLimit()), w.currentRms() * ki, finiteOrNaN(w.currentLimit()),
+                w.dissipation() * ki * ki, w.srf(), w.dvdt() * kv, finiteOrNaN(w.dvdtLimit()), b.storedEnergy() * kv * kv,
+                List.copyOf(alternatives),
                 List.copyOf(b.warnings()));
         return new Chosen(b, report, null);
+    }
+
+    /** A limit the part does not state is infinite in the capacitor model and NaN (unknown) in the report. */
+    private static double finiteOrNaN(double v) {
+        return Double.isFinite(v) ? v : Double.NaN;
     }
 }

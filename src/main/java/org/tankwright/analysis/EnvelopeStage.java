@@ -133,6 +133,28 @@ final class EnvelopeStage {
                 grid.offsets().clone(), v);
     }
 
+    /** A heater's envelope is its cold and hot points: the worst of each stress is the larger of the two. */
+    static EnvelopeReport heater(HeaterStage.Heated h, Design d) {
+        List<WorstCase> worst = new ArrayList<>();
+        String coldAt = "cold point, " + Quantities.format(h.report().cold().temperature(), Dimension.TEMPERATURE, 3);
+        String hotAt = "hot point, " + Quantities.format(h.report().hot().temperature(), Dimension.TEMPERATURE, 3)
+                + " at " + Quantities.format(h.hot().design().frequency(), Dimension.FREQUENCY, 4);
+        for (org.tankwright.circuit.ElementStress c : h.cold().operatingPoint().elements()) {
+            if (!h.hot().operatingPoint().has(c.name()) || c.name().equals(Topologies.SOURCE)) {
+                continue;
+            }
+            org.tankwright.circuit.ElementStress x = h.hot().operatingPoint().stress(c.name());
+            String e = c.name().toLowerCase(java.util.Locale.ROOT);
+            boolean hotV = x.vPeak() > c.vPeak();
+            worst.add(new WorstCase("v_" + e + "_peak_V", c.name(), Math.max(c.vPeak(), x.vPeak()), Dimension.VOLTAGE,
+                    hotV ? hotAt : coldAt));
+            boolean hotI = x.iRms() > c.iRms();
+            worst.add(new WorstCase("i_" + e + "_A", c.name(), Math.max(c.iRms(), x.iRms()), Dimension.CURRENT,
+                    hotI ? hotAt : coldAt));
+        }
+        return new EnvelopeReport(2, List.copyOf(worst), Double.NaN, Double.NaN, List.of(), Double.NaN, Double.NaN, null);
+    }
+
     static String element(String key) {
         String k = key.toLowerCase(java.util.Locale.ROOT);
         for (String e : new String[] {"c1", "c2", "l1", "l2"}) {

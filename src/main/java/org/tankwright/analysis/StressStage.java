@@ -88,7 +88,7 @@ final class StressStage {
         return switch (id) {
             case "C1" -> heater ? "tank capacitor" : "primary capacitor bank";
             case "C2" -> "secondary capacitor bank";
-            case "L1" -> heater ? "work coil" : "primary coil";
+            case "L1" -> heater ? "work coil with its workpiece" : "primary coil";
             case "L2" -> "secondary coil";
             case "RL" -> "load (AC equivalent at the secondary terminals)";
             default -> id;

@@ -66,7 +66,7 @@ public final class CoilCommand implements Callable<Integer> {
                     + "trace:2mm/1oz or trace:2mm/35um (width/copper)")
     String wire;
     @Option(names = "--wire-outer", paramLabel = "LENGTH",
-            description = "insulated outer diameter (round) or bundle diameter (litz); default: bare, or a 50 % fill bundle")
+            description = "insulated outer diameter (round) or bundle diameter (litz); default: bare, or a 50 %% fill bundle")
     String wireOuter;
     @Option(names = "--material", defaultValue = "copper", paramLabel = "METAL", description = "copper | aluminium")
     String material;

@@ -20,8 +20,6 @@ import picocli.CommandLine.Command;
                 FieldCommand.class,
                 CoilCommand.class,
                 CheckCommand.class,
-                CoupleCommand.class,
-                FieldCommand.class,
         })
 public final class Main implements Runnable {
 
