@@ -10,6 +10,8 @@ import picocli.CommandLine.Command;
         description = "Design and tune resonant inductive circuits: wireless-power links and induction heaters.",
         subcommands = {
                 CommandLine.HelpCommand.class,
+                OpenCommand.class,
+                ValidateCommand.class,
         })
 public final class Main implements Runnable {
 
@@ -25,7 +27,10 @@ public final class Main implements Runnable {
 
     @Override
     public void run() {
-        // No command: the workbench on the demo design (same as `tankwright open`).
-        new CommandLine(new Main()).usage(System.out);
+        // No command: the workbench on the demo design, as `tankwright open`.
+        int status = new OpenCommand().call();
+        if (status != ExitCodes.OK) {
+            throw new ExitCodes.UserError(status, "could not open the workbench");
+        }
     }
 }

@@ -1,0 +1,46 @@
+package org.tankwright.cli;
+
+import org.tankwright.analysis.Analysis;
+import org.tankwright.analysis.Presets;
+import org.tankwright.analysis.Summary;
+import org.tankwright.design.Design;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Parameters;
+
+import java.awt.GraphicsEnvironment;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+
+/**
+ * {@code tankwright open [FILE]}: the workbench window on a design (the bundled demo when no file
+ * is given). Without a display it says so and prints the design's solved summary instead.
+ */
+@Command(name = "open", mixinStandardHelpOptions = true, versionProvider = VersionInfo.class,
+        description = "Open the workbench window on a design file (the bundled demo when none is given). "
+                + "Without a display, print the solved summary instead.")
+public final class OpenCommand implements Callable<Integer> {
+    @Parameters(arity = "0..1", paramLabel = "FILE", description = "design file to open")
+    Path file;
+
+    @Override
+    public Integer call() {
+        Design design = file == null ? Presets.demo() : DesignArgs.load(file);
+        if (GraphicsEnvironment.isHeadless()) {
+            return printSummary(design, "No display is available");
+        }
+        try {
+            org.tankwright.ui.Workbench.launch(file, design);
+        } catch (java.awt.AWTError | java.awt.HeadlessException | UnsatisfiedLinkError e) {
+            return printSummary(design, "The display cannot be opened (" + e.getMessage() + ")");
+        }
+        return ExitCodes.OK;
+    }
+
+    private static int printSummary(Design design, String why) {
+        System.out.println(why + ", so the workbench window cannot open."
+                + " Here is the solved summary of \"" + design.name() + "\" instead.");
+        System.out.println();
+        System.out.print(Summary.text(Analysis.run(design)));
+        return ExitCodes.OK;
+    }
+}
