@@ -32,12 +32,12 @@ public final class PaneArrangement {
     /** Builds the default arrangement; the panes must be registered with the docking framework. */
     public static PaneArrangement createDefault() {
         ApplicationLayout layout = new WindowLayoutBuilder(EDITOR)
-                .dock(PLOTS, EDITOR, DockingRegion.SOUTH, 0.62)
+                .dock(PLOTS, EDITOR, DockingRegion.SOUTH, 0.36)
                 .dock(STRESS, PLOTS, DockingRegion.CENTER)
                 .dock(CHECKS, PLOTS, DockingRegion.CENTER)
                 .display(PLOTS)
-                .dock(DESIGNS, EDITOR, DockingRegion.WEST, 0.17)
-                .dock(FIGURES, EDITOR, DockingRegion.EAST, 0.70)
+                .dock(DESIGNS, EDITOR, DockingRegion.WEST, 0.16)
+                .dock(FIGURES, EDITOR, DockingRegion.EAST, 0.26)
                 .buildApplicationLayout();
         return new PaneArrangement(layout);
     }
