@@ -10,6 +10,7 @@ public final class Analysis {
     /** Analyses a design. Pure: the same design gives the same result; safe to call off the event thread. */
     public static AnalysisResult run(Design design) {
         long t0 = System.nanoTime();
-        return new AnalysisResult(design, System.nanoTime() - t0);
+        return new AnalysisResult(design, java.util.List.of(), null, null, java.util.List.of(), null,
+                java.util.List.of(), null, null, java.util.List.of(), java.util.List.of(), System.nanoTime() - t0);
     }
 }

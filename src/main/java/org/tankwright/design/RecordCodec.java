@@ -153,7 +153,9 @@ public final class RecordCodec {
             double v = Quantities.parse(text, d);
             return checkNumber(t, f, v, text, path, p);
         } catch (QuantityFormatException e) {
-            p.add(path, text, e.getMessage().substring(e.getMessage().indexOf(": ") + 2));
+            String quoted = "'" + text + "' ";
+            String msg = e.getMessage();
+            p.add(path, text, msg.startsWith(quoted) ? msg.substring(quoted.length()) : msg);
             return t.isPrimitive() ? primitiveZero(t) : null;
         }
     }
