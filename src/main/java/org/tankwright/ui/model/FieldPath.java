@@ -15,9 +15,15 @@ import org.tankwright.design.RecordCodec;
 public final class FieldPath {
 
     private final List<RecordComponent> steps;
+    private final String json;
 
     private FieldPath(List<RecordComponent> steps) {
         this.steps = List.copyOf(steps);
+        StringBuilder sb = new StringBuilder("$");
+        for (RecordComponent c : steps) {
+            sb.append('.').append(RecordCodec.key(c));
+        }
+        this.json = sb.toString();
     }
 
     /** The root path (the design itself). */
@@ -55,11 +61,7 @@ public final class FieldPath {
 
     /** The JSON path, as the validator writes it: {@code $.primary.wire.diameter_m}. */
     public String json() {
-        StringBuilder sb = new StringBuilder("$");
-        for (RecordComponent c : steps) {
-            sb.append('.').append(RecordCodec.key(c));
-        }
-        return sb.toString();
+        return json;
     }
 
     /** The value at this path in {@code root}, or null when it or a section on the way is absent. */

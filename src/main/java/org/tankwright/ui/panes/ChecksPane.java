@@ -4,6 +4,7 @@ import io.github.andrewauclair.moderndocking.DockableStyle;
 import java.awt.Color;
 import java.awt.event.MouseAdapter;
 import java.awt.event.MouseEvent;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.function.BiConsumer;
 import javax.swing.JLabel;
@@ -13,42 +14,35 @@ import javax.swing.tree.DefaultMutableTreeNode;
 import javax.swing.tree.DefaultTreeCellRenderer;
 import javax.swing.tree.DefaultTreeModel;
 import org.tankwright.analysis.AnalysisResult;
-import org.tankwright.design.Problem;
-import org.tankwright.ui.model.DesignCheck;
+import org.tankwright.checks.Finding;
+import org.tankwright.checks.Severity;
 import org.tankwright.ui.model.OpenDesign;
 import org.tankwright.ui.model.Workspace;
 
 /**
- * Findings grouped by severity, with the signal words and colours of ANSI Z535 / ISO 3864
- * (danger red, warning orange, caution yellow, notice blue). Double-click a finding to go to
- * its field.
+ * Findings grouped by severity under the signal words and colours of ANSI Z535 / ISO 3864
+ * (danger red, warning orange, caution yellow, notice blue), then the pipeline's notes. Each
+ * finding shows the number, the limit, its source and what to do; double-click goes to the
+ * field it concerns.
  */
 public final class ChecksPane extends ResultPane {
 
-    /** Severity, most severe first. */
-    public enum Severity {
-        DANGER(new Color(0xc8102e)), WARNING(new Color(0xff8200)), CAUTION(new Color(0xd4a000)), NOTICE(new Color(0x0067a5));
-
-        private final Color color;
-
-        Severity(Color color) {
-            this.color = color;
-        }
-
-        public Color color() {
-            return color;
-        }
-    }
-
-    /** One finding: its weight, what it says, and the design field it is about (a JSON path, or null). */
-    public record Finding(Severity severity, String text, String path) {
+    /** A line in the tree: its text and the design field it concerns (a JSON path, or null). */
+    record Line(String text, String path) {
         @Override
         public String toString() {
             return text;
         }
     }
 
-    private final BiConsumer<OpenDesign, String> reveal;
+    /** A group heading: a severity, or the notes. */
+    record Group(String title, Color color) {
+        @Override
+        public String toString() {
+            return title;
+        }
+    }
+
     private final DefaultMutableTreeNode root = new DefaultMutableTreeNode("findings");
     private final JTree tree = new JTree(new DefaultTreeModel(root));
     private final JLabel state = new JLabel(" ");
@@ -56,7 +50,6 @@ public final class ChecksPane extends ResultPane {
 
     public ChecksPane(Workspace workspace, BiConsumer<OpenDesign, String> reveal) {
         super(PaneArrangement.CHECKS, "Checks", "Design-rule and safety findings by severity", DockableStyle.BOTH, workspace);
-        this.reveal = reveal;
         tree.setName("checksTree");
         tree.setRootVisible(false);
         tree.setShowsRootHandles(true);
@@ -66,8 +59,8 @@ public final class ChecksPane extends ResultPane {
                                                                    boolean leaf, int row, boolean focus) {
                 super.getTreeCellRendererComponent(t, value, sel, exp, leaf, row, focus);
                 Object o = ((DefaultMutableTreeNode) value).getUserObject();
-                if (o instanceof Severity s && !sel) {
-                    setForeground(s.color());
+                if (o instanceof Group g && g.color() != null && !sel) {
+                    setForeground(g.color());
                 }
                 return this;
             }
@@ -77,8 +70,8 @@ public final class ChecksPane extends ResultPane {
             public void mouseClicked(MouseEvent e) {
                 if (e.getClickCount() == 2 && tree.getSelectionPath() != null) {
                     Object o = ((DefaultMutableTreeNode) tree.getSelectionPath().getLastPathComponent()).getUserObject();
-                    if (o instanceof Finding f && f.path() != null && workspace.selected() != null) {
-                        reveal.accept(workspace.selected(), f.path());
+                    if (o instanceof Line l && l.path() != null && workspace.selected() != null) {
+                        reveal.accept(workspace.selected(), l.path());
                     }
                 }
             }
@@ -88,10 +81,51 @@ public final class ChecksPane extends ResultPane {
         add(new JScrollPane(tree));
     }
 
-    /** The findings a result holds: today the design rules of the document itself; the engine's checks join when the result carries them. */
-    static List<Finding> findingsOf(AnalysisResult r) {
-        List<Problem> problems = DesignCheck.problems(r.design());
-        return problems.stream().map(p -> new Finding(Severity.WARNING, p.toString(), p.path())).toList();
+    /** The signal colour of a severity (ANSI Z535.1 safety colours; notice is safety blue). */
+    static Color color(Severity s) {
+        return switch (s) {
+            case DANGER -> new Color(0xc8102e);
+            case WARNING -> new Color(0xff8200);
+            case CAUTION -> new Color(0xc9a000);
+            case NOTICE -> new Color(0x2f7fc1);
+        };
+    }
+
+    /** The design field a finding's element points to, or null: a JSON path as is, C1/C2/L1/L2 to their sections. */
+    static String fieldOf(String element) {
+        if (element == null || element.isBlank()) {
+            return null;
+        }
+        if (element.startsWith("$")) {
+            return element;
+        }
+        return switch (element) {
+            case "C1" -> "$.compensation.c1_F";
+            case "C2" -> "$.compensation.c2_F";
+            case "L1" -> "$.primary";
+            case "L2" -> "$.secondary";
+            case "RL" -> "$.load";
+            case "S" -> "$.source";
+            default -> null;
+        };
+    }
+
+    /** One finding as a line: what, the number against the limit, the source and what to do. */
+    static String describe(Finding f) {
+        StringBuilder sb = new StringBuilder(f.severity().name()).append(' ').append(f.id()).append(": ").append(f.message());
+        if (Double.isFinite(f.value())) {
+            sb.append(" — ").append(org.tankwright.units.Quantities.number(f.value(), 3)).append(' ').append(f.unit());
+            if (Double.isFinite(f.limit())) {
+                sb.append(" against ").append(org.tankwright.units.Quantities.number(f.limit(), 3)).append(' ').append(f.unit());
+            }
+        }
+        if (f.source() != null && !f.source().isBlank()) {
+            sb.append(" (").append(f.source()).append(')');
+        }
+        if (f.action() != null && !f.action().isBlank()) {
+            sb.append(". ").append(f.action());
+        }
+        return sb.toString();
     }
 
     public List<Finding> findings() {
@@ -100,28 +134,34 @@ public final class ChecksPane extends ResultPane {
 
     @Override
     protected void show(OpenDesign d) {
-        findings = d == null || d.result() == null ? List.of() : findingsOf(d.result());
+        AnalysisResult r = d == null ? null : d.result();
+        findings = r == null || r.findings() == null ? List.of() : r.findings();
         root.removeAllChildren();
         for (Severity s : Severity.values()) {
             List<Finding> these = findings.stream().filter(f -> f.severity() == s).toList();
-            if (these.isEmpty()) {
-                continue;
+            if (!these.isEmpty()) {
+                DefaultMutableTreeNode group = new DefaultMutableTreeNode(new Group(s.name() + " (" + these.size() + ")", color(s)));
+                these.forEach(f -> group.add(new DefaultMutableTreeNode(new Line(describe(f), fieldOf(f.element())))));
+                root.add(group);
             }
-            DefaultMutableTreeNode group = new DefaultMutableTreeNode(s);
-            these.forEach(f -> group.add(new DefaultMutableTreeNode(f)));
+        }
+        List<String> notes = r == null || r.notes() == null ? List.of() : new ArrayList<>(r.notes());
+        if (!notes.isEmpty()) {
+            DefaultMutableTreeNode group = new DefaultMutableTreeNode(new Group("Notes of the analysis (" + notes.size() + ")", null));
+            notes.forEach(n -> group.add(new DefaultMutableTreeNode(new Line(n, null))));
             root.add(group);
         }
         ((DefaultTreeModel) tree.getModel()).reload();
         for (int i = 0; i < tree.getRowCount(); i++) {
             tree.expandRow(i);
         }
-        state.setText(d == null ? " No design open" : findings.isEmpty()
-                ? " No findings. The engine's safety and design-rule checks are not in this version of the analysis;"
-                  + " defer to local codes and licensed practice for high voltage, stored energy, RF fields and hot metal."
-                : " " + findings.size() + " finding(s)");
+        state.setText(d == null ? " No design open" : r == null ? " Computing…" : findings.isEmpty()
+                ? " No findings from the checks. Still: defer to local codes and licensed practice for high voltage,"
+                  + " stored energy, RF fields and hot metal."
+                : " " + findings.size() + " finding(s); double-click one to go to its field");
     }
 
-    /** Counts by severity (danger, warning, caution+notice), for the status bar. */
+    /** Counts by severity: danger, warning, and caution with notice (for the status bar). */
     public int[] counts() {
         int[] c = new int[3];
         for (Finding f : findings) {

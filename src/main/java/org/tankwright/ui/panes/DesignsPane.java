@@ -30,6 +30,7 @@ public final class DesignsPane extends Pane implements Workspace.Listener {
     private final DefaultMutableTreeNode root = new DefaultMutableTreeNode("designs");
     private final JTree tree = new JTree(new DefaultTreeModel(root));
     private boolean quiet;
+    private String shown = "";
 
     /** @param reveal called with a design and a section's JSON path when the user picks a node */
     public DesignsPane(Workspace workspace, BiConsumer<OpenDesign, String> reveal) {
@@ -78,7 +79,28 @@ public final class DesignsPane extends Pane implements Workspace.Listener {
         }
     }
 
+    /** What the tree shows, to skip rebuilding it when an edit changed none of it. */
+    private String signature() {
+        StringBuilder sb = new StringBuilder();
+        for (OpenDesign od : workspace.designs()) {
+            sb.append(System.identityHashCode(od)).append(od.isDirty()).append(od.design().name()).append('|');
+            Design d = od.design();
+            for (RecordComponent c : Design.class.getRecordComponents()) {
+                if (Record.class.isAssignableFrom(c.getType())) {
+                    Object v = FieldPath.root().then(c).get(d);
+                    sb.append(v == null ? '-' : '+').append(v instanceof Coil coil ? coil.label() : "");
+                }
+            }
+        }
+        return sb.toString();
+    }
+
     private void rebuild() {
+        String now = signature();
+        if (now.equals(shown)) {
+            return;
+        }
+        shown = now;
         quiet = true;
         try {
             root.removeAllChildren();

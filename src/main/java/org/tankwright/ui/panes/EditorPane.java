@@ -48,7 +48,9 @@ public final class EditorPane extends Pane implements Workspace.Listener {
 
         private void updateDrawing() {
             Sketches.Outcome s = Sketches.of(design.design());
-            drawing.show(s.sketch(), s.whyNone());
+            if (!java.util.Objects.equals(s.sketch(), drawing.sketch()) || drawing.sketch() == null) {
+                drawing.show(s.sketch(), s.whyNone());
+            }
         }
 
         public DesignForm form() {
@@ -121,13 +123,22 @@ public final class EditorPane extends Pane implements Workspace.Listener {
                     return nt;
                 });
                 int i = tabs.indexOfComponent(t);
-                tabs.setTitleAt(i, (d.isDirty() ? "• " : "") + d.title());
-                tabs.setToolTipTextAt(i, d.file() != null ? d.file().toString() : "not saved yet");
+                String title = (d.isDirty() ? "• " : "") + d.title();
+                String tip = d.file() != null ? d.file().toString() : "not saved yet";
+                if (!title.equals(tabs.getTitleAt(i))) {
+                    tabs.setTitleAt(i, title);
+                }
+                if (!tip.equals(tabs.getToolTipTextAt(i))) {
+                    tabs.setToolTipTextAt(i, tip);
+                }
             }
-            removeAll();
-            add(byDesign.isEmpty() ? empty : tabs);
-            revalidate();
-            repaint();
+            java.awt.Component want = byDesign.isEmpty() ? empty : tabs;
+            if (want.getParent() != this) {
+                removeAll();
+                add(want);
+                revalidate();
+                repaint();
+            }
         } finally {
             quiet = false;
         }

@@ -8,6 +8,7 @@ import javax.swing.JScrollPane;
 import javax.swing.JTable;
 import javax.swing.table.TableRowSorter;
 import org.tankwright.analysis.AnalysisResult;
+import org.tankwright.analysis.ElementStress;
 import org.tankwright.ui.model.OpenDesign;
 import org.tankwright.ui.model.Workspace;
 import org.tankwright.units.Dimension;
@@ -20,7 +21,7 @@ public final class StressPane extends ResultPane {
     public record Row(String component, double vRms, double vPeak, double iRms, double iPeak, double loss,
                       String rating, double margin, String status) { }
 
-    private static final String[] COLUMNS = {"component", "V rms", "V peak", "I rms", "I peak", "loss", "rating", "margin", "status"};
+    private static final String[] COLUMNS = {"element", "V rms", "V peak (worst)", "I rms (worst)", "I peak", "loss", "rating", "margin", "status"};
     private static final Dimension[] DIMS = {null, Dimension.VOLTAGE, Dimension.VOLTAGE, Dimension.CURRENT, Dimension.CURRENT,
             Dimension.POWER, null, Dimension.FRACTION, null};
     private final RowsModel<Row> model = new RowsModel<>(COLUMNS, StressPane::cell);
@@ -44,9 +45,24 @@ public final class StressPane extends ResultPane {
         add(new JScrollPane(table));
     }
 
-    /** The stress rows a result holds, and a note when it holds none. */
+    /** The stress rows of a result: each element at the operating point, or at the envelope's worst point when larger. */
     static List<Row> rowsOf(AnalysisResult r) {
-        return List.of(); // the result does not carry component stresses yet (see docs/workbench.md)
+        if (r.stresses() == null) {
+            return List.of();
+        }
+        return r.stresses().stream().map(StressPane::row).toList();
+    }
+
+    private static Row row(ElementStress s) {
+        double vPeak = Double.isFinite(s.worstVoltagePeak()) ? Math.max(s.voltagePeak(), s.worstVoltagePeak()) : s.voltagePeak();
+        double iRms = Double.isFinite(s.worstCurrentRms()) ? Math.max(s.currentRms(), s.worstCurrentRms()) : s.currentRms();
+        String rating = (Double.isFinite(s.voltageRating()) ? Quantities.format(s.voltageRating(), Dimension.VOLTAGE, 3) + " pk" : "")
+                + (Double.isFinite(s.voltageRating()) && Double.isFinite(s.currentRating()) ? ", " : "")
+                + (Double.isFinite(s.currentRating()) ? Quantities.format(s.currentRating(), Dimension.CURRENT, 3) + " rms" : "");
+        double m = s.margin();
+        String status = !Double.isFinite(m) ? "no rating" : m < 0 ? "OVER RATING" : m < 0.2 ? "low margin" : "ok";
+        return new Row(s.id() + " " + s.role(), s.voltageRms(), vPeak, iRms, s.currentPeak(), s.loss(),
+                rating.isEmpty() ? "—" : rating, m, status);
     }
 
     @Override
@@ -54,7 +70,7 @@ public final class StressPane extends ResultPane {
         List<Row> rows = d == null || d.result() == null ? List.of() : rowsOf(d.result());
         model.set(rows);
         state.setText(d == null ? " No design open"
-                : rows.isEmpty() ? " Component stresses: not computed for this design by this version of the analysis" : " ");
+                : rows.isEmpty() ? " Component stresses: not computed for this design" : " Peak voltage and rms current include the envelope's worst point; margin is to the derated rating");
     }
 
     /** A number with the dimension it is shown in, sorted by value. */
