@@ -127,6 +127,25 @@ class WorkbenchWindowTest {
         }
     }
 
+    @Test
+    void anUnreadableSavedPaneArrangementFallsBackToTheDefault(@TempDir Path dir) throws Exception {
+        WorkbenchWindow w = WindowHarness.open(Presets.demo(), Analysis::run);
+        Path saved = dir.resolve("panes.xml");
+        java.nio.file.Files.writeString(saved, "<not-a-layout");
+        boolean restored = WindowHarness.onEdt(() -> {
+            try {
+                return w.arrangement().restoreAndRemember(saved);
+            } finally {
+                io.github.andrewauclair.moderndocking.app.AppState.setAutoPersist(false);
+            }
+        });
+        assertFalse(restored, "the damaged arrangement is not used");
+        for (String pane : new String[] {"designs", "editor", "figures", "plots", "stress", "checks"}) {
+            assertTrue(WindowHarness.onEdt(() -> io.github.andrewauclair.moderndocking.app.Docking.isDocked(pane)),
+                    pane + " is in place after the fallback");
+        }
+    }
+
     private static QuantityField c1(WorkbenchWindow w) {
         OpenDesign d = w.workspace().selected();
         FieldEditor e = w.editor().tabOf(d).form().editorFor(C1);
