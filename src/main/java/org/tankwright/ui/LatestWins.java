@@ -1,0 +1,86 @@
+package org.tankwright.ui;
+
+import java.util.Objects;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.atomic.AtomicLong;
+import java.util.function.Consumer;
+import java.util.function.Function;
+import javax.swing.SwingUtilities;
+
+/**
+ * Runs a computation off the event thread, latest request wins: one worker thread; a request
+ * that is superseded before it starts is skipped, and a result whose request was superseded
+ * while it ran is dropped. Outcomes are published on the event thread.
+ *
+ * @param <I> the input (an immutable document)
+ * @param <O> the output (an immutable result)
+ */
+public final class LatestWins<I, O> implements AutoCloseable {
+
+    /** What one request came to: its input, output or failure, and the time the computation took. */
+    public record Outcome<I, O>(I input, O output, Throwable failure, long nanos) {
+        public boolean succeeded() {
+            return failure == null;
+        }
+    }
+
+    private final Function<I, O> computation;
+    private final Consumer<Outcome<I, O>> publisher;
+    private final Runnable onStart;
+    private final ExecutorService worker;
+    private final AtomicLong latest = new AtomicLong();
+
+    /**
+     * @param computation the pure function to run (called on the worker thread)
+     * @param onStart     run on the event thread when a request is accepted (e.g. show "computing")
+     * @param publisher   receives each outcome that is still current, on the event thread
+     */
+    public LatestWins(Function<I, O> computation, Runnable onStart, Consumer<Outcome<I, O>> publisher) {
+        this.computation = Objects.requireNonNull(computation);
+        this.onStart = Objects.requireNonNull(onStart);
+        this.publisher = Objects.requireNonNull(publisher);
+        this.worker = Executors.newSingleThreadExecutor(r -> {
+            Thread t = new Thread(r, "tankwright-recompute");
+            t.setDaemon(true);
+            t.setPriority(Thread.NORM_PRIORITY - 1);
+            return t;
+        });
+    }
+
+    /** Asks for {@code input} to be computed; supersedes every earlier request. Call on the event thread. */
+    public void submit(I input) {
+        long generation = latest.incrementAndGet();
+        onStart.run();
+        worker.execute(() -> run(input, generation));
+    }
+
+    private boolean isCurrent(long generation) {
+        return latest.get() == generation;
+    }
+
+    private void run(I input, long generation) {
+        if (!isCurrent(generation)) {
+            return; // superseded before it started
+        }
+        long t0 = System.nanoTime();
+        O output = null;
+        Throwable failure = null;
+        try {
+            output = computation.apply(input);
+        } catch (RuntimeException | StackOverflowError e) {
+            failure = e;
+        }
+        Outcome<I, O> outcome = new Outcome<>(input, output, failure, System.nanoTime() - t0);
+        SwingUtilities.invokeLater(() -> {
+            if (isCurrent(generation)) {
+                publisher.accept(outcome);
+            }
+        });
+    }
+
+    @Override
+    public void close() {
+        worker.shutdownNow();
+    }
+}

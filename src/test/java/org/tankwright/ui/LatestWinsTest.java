@@ -1,0 +1,76 @@
+package org.tankwright.ui;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import java.util.concurrent.CopyOnWriteArrayList;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.TimeUnit;
+import javax.swing.SwingUtilities;
+import org.junit.jupiter.api.Test;
+
+class LatestWinsTest {
+
+    @Test
+    void requestsSupersededWhileOneRunsAreSkippedAndOnlyTheLatestIsPublished() throws Exception {
+        CountDownLatch firstStarted = new CountDownLatch(1);
+        CountDownLatch release = new CountDownLatch(1);
+        CountDownLatch published = new CountDownLatch(1);
+        List<Integer> computed = new CopyOnWriteArrayList<>();
+        List<Integer> shown = new CopyOnWriteArrayList<>();
+        List<Boolean> onEdt = new CopyOnWriteArrayList<>();
+        try (LatestWins<Integer, Integer> lw = new LatestWins<>(i -> {
+            computed.add(i);
+            if (i == 1) {
+                firstStarted.countDown();
+                await(release);
+            }
+            return i * i;
+        }, () -> { }, o -> {
+            shown.add(o.output());
+            onEdt.add(SwingUtilities.isEventDispatchThread());
+            if (o.input() == 10) {
+                published.countDown();
+            }
+        })) {
+            SwingUtilities.invokeAndWait(() -> lw.submit(1));
+            assertTrue(firstStarted.await(5, TimeUnit.SECONDS));
+            SwingUtilities.invokeAndWait(() -> {
+                for (int i = 2; i <= 10; i++) {
+                    lw.submit(i);
+                }
+            });
+            release.countDown();
+            assertTrue(published.await(5, TimeUnit.SECONDS));
+            SwingUtilities.invokeAndWait(() -> { }); // flush
+            assertEquals(List.of(1, 10), computed, "requests 2..9 were superseded before they started");
+            assertEquals(List.of(100), shown, "the result of request 1 was stale when it finished");
+            assertEquals(List.of(true), onEdt);
+        }
+    }
+
+    @Test
+    void aFailureIsPublishedAsAnOutcome() throws Exception {
+        CountDownLatch done = new CountDownLatch(1);
+        Throwable[] seen = new Throwable[1];
+        try (LatestWins<String, Integer> lw = new LatestWins<>(s -> {
+            throw new IllegalArgumentException("bad " + s);
+        }, () -> { }, o -> {
+            seen[0] = o.failure();
+            done.countDown();
+        })) {
+            SwingUtilities.invokeAndWait(() -> lw.submit("x"));
+            assertTrue(done.await(5, TimeUnit.SECONDS));
+            assertEquals("bad x", seen[0].getMessage());
+        }
+    }
+
+    private static void await(CountDownLatch l) {
+        try {
+            l.await(5, TimeUnit.SECONDS);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+    }
+}
