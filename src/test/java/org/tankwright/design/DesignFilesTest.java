@@ -85,7 +85,7 @@ class DesignFilesTest {
         Design d = DesignFiles.parse(demoText(), "demo");
         assertEquals(d, DesignFiles.parse(DesignFiles.toJson(d), "again"));
         assertEquals(0.05, d.primary().diameter(), 1e-15);
-        assertEquals(120e3, d.frequency(), 1e-9);
+        assertEquals(130e3, d.frequency(), 1e-9);
     }
 
     @Test
