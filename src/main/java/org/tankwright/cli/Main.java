@@ -12,6 +12,8 @@ import picocli.CommandLine.Command;
                 CommandLine.HelpCommand.class,
                 OpenCommand.class,
                 ValidateCommand.class,
+                SheetCommand.class,
+                ExportCommand.class,
         })
 public final class Main implements Runnable {
 

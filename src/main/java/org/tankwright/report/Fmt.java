@@ -27,7 +27,18 @@ final class Fmt {
     }
 
     static String q(double v, Dimension d, int sig) {
+        if (d == Dimension.VOLTAGE_RATE && has(v)) {
+            return inPreferred(v, d, "V/\u00B5s", sig);
+        }
+        if (d == Dimension.VOLUME_FLOW && has(v)) {
+            return inPreferred(v, d, "L/min", sig);
+        }
         return Quantities.format(v, d, sig).replace(' ', NBSP);
+    }
+
+    /** A value of a dimension without SI prefixes, in the bench's usual unit (one of the dimension's own spellings). */
+    private static String inPreferred(double v, Dimension d, String unit, int sig) {
+        return Quantities.number(v / d.units().get(unit), sig) + NBSP + unit;
     }
 
     /** A fraction as a percentage with {@value #READING} significant digits. */

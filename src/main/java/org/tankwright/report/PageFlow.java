@@ -181,7 +181,8 @@ final class PageFlow implements Closeable {
         float[] cols = t.columnWidths(w);
         List<List<String>> header = cells(t.headers(), cols, BODY);
         float headerH = rowHeight(header, BODY);
-        ensure(headerH + lineHeight(BODY) + 2 * CELL_PAD);
+        float firstRow = t.rows().isEmpty() ? 0 : rowHeight(cells(t.rows().get(0), cols, BODY), BODY);
+        ensure(headerH + firstRow);
         drawRow(header, cols, BODY, true, headerH, t);
         for (String[] row : t.rows()) {
             List<List<String>> cells = cells(row, cols, BODY);

@@ -124,7 +124,7 @@ public final class ResultJson {
 
     /** Writes the JSON text atomically. */
     public static void write(AnalysisResult r, Path file) throws IOException {
-        SeriesCsv.writeAtomically(file, text(r));
+        AtomicFiles.writeText(file, text(r));
     }
 
     /** The key of a numeric component: its name in snake case with its unit's suffix. */

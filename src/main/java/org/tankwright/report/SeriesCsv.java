@@ -5,10 +5,8 @@ import org.tankwright.analysis.Series;
 import org.tankwright.units.Dimension;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
@@ -71,22 +69,10 @@ public final class SeriesCsv {
         List<Path> written = new ArrayList<>();
         for (Map.Entry<String, Series> e : all(r).entrySet()) {
             Path file = dir.resolve(e.getKey() + ".csv");
-            writeAtomically(file, csv(e.getValue()));
+            AtomicFiles.writeText(file, csv(e.getValue()));
             written.add(file);
         }
         return written;
-    }
-
-    static void writeAtomically(Path file, String text) throws IOException {
-        Path dir = file.toAbsolutePath().getParent();
-        Files.createDirectories(dir);
-        Path tmp = Files.createTempFile(dir, ".export", ".tmp");
-        try {
-            Files.writeString(tmp, text, StandardCharsets.UTF_8);
-            Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING);
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
     }
 
     private static String cell(double v) {

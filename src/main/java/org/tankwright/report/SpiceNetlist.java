@@ -3,9 +3,13 @@ package org.tankwright.report;
 import org.tankwright.report.TunedNetwork.Kind;
 import org.tankwright.report.TunedNetwork.Part;
 
+import org.tankwright.analysis.AnalysisResult;
+
+import java.io.IOException;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
+import java.nio.file.Path;
 import java.util.Locale;
 
 /**
@@ -50,6 +54,11 @@ public final class SpiceNetlist {
         sb.append(".AC LIN 1 ").append(f).append(' ').append(f).append('\n');
         sb.append(".END\n");
         return sb.toString();
+    }
+
+    /** Writes the netlist of a result's tuned network, titled with the design's name (atomically). */
+    public static void write(AnalysisResult r, Path file) throws IOException {
+        AtomicFiles.writeText(file, write(TunedNetwork.of(r), r.design().name()));
     }
 
     /** A value with a SPICE scale letter and up to 6 significant digits: {@code 47N}, {@code 1.5MEG}, {@code 12.5M} (milli). */
