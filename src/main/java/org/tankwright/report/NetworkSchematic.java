@@ -75,7 +75,7 @@ final class NetworkSchematic {
                 lines = Math.max(lines, o instanceof Branch b ? b.label().size() : 0);
             }
         }
-        return top() + Math.max(78f, lines * LINE + 34f) + (secondary.isEmpty() ? 8f : 8f + 2 * LINE);
+        return top() + Math.max(78f, lines * LINE + 34f) + 8f;
     }
 
     private float top() {
@@ -97,19 +97,20 @@ final class NetworkSchematic {
         FontMetrics fm = g.getFontMetrics();
         float h = height();
         float railTop = top();
-        float railBottom = h - (secondary.isEmpty() ? 8f : 8f + 2 * LINE);
+        float railBottom = h - 8f;
         List<float[]> slotsP = slots(primary, fm);
         List<float[]> slotsS = slots(secondary, fm);
         float wP = total(slotsP);
         float wS = total(slotsS);
-        float natural = wP + (secondary.isEmpty() ? 0 : COUPLING_GAP + wS);
+        float gap = Math.max(COUPLING_GAP, width(couplingLabel(), fm) + 30);
+        float natural = wP + (secondary.isEmpty() ? 0 : gap + wS);
         float scale = Math.min(1f, width / natural);
         Graphics2D c = (Graphics2D) g.create();
         c.translate((width - natural * scale) / 2, 0);
         c.scale(scale, 1);
         float xL1 = drawSide(c, primary, slotsP, 0, railTop, railBottom, fm);
         if (!secondary.isEmpty()) {
-            float xL2 = drawSide(c, secondary, slotsS, wP + COUPLING_GAP, railTop, railBottom, fm);
+            float xL2 = drawSide(c, secondary, slotsS, wP + gap, railTop, railBottom, fm);
             drawCoupling(c, xL1, xL2, railTop, railBottom, fm);
         }
         c.dispose();
@@ -190,14 +191,12 @@ final class NetworkSchematic {
         float end = mid + Symbols.LENGTH / 2;
         Symbols.dot(g, xL1 - 7, start + 2, 1.9);
         Symbols.dot(g, xL2 + 7, net.reversed() ? end - 2 : start + 2, 1.9);
-        List<String> text = new ArrayList<>();
-        text.add("k " + Fmt.number(net.coupling(), Fmt.BUILD));
-        text.add("M " + Fmt.build(net.mutual(), Dimension.INDUCTANCE));
         float cx = (xL1 + xL2) / 2;
-        label(g, text, cx, bottom + LINE + 1, true, false, fm);
-        g.setStroke(Symbols.WIRE);
-        g.draw(new Line2D.Float(cx - 3, start - 4, cx - 3, end + 4));
-        g.draw(new Line2D.Float(cx + 3, start - 4, cx + 3, end + 4));
+        label(g, couplingLabel(), cx, mid - LINE / 2 + FONT / 2, true, false, fm);
+    }
+
+    private List<String> couplingLabel() {
+        return List.of("k " + Fmt.number(net.coupling(), Fmt.BUILD), "M " + Fmt.build(net.mutual(), Dimension.INDUCTANCE));
     }
 
     private static void symbol(Graphics2D g, Part p, float cx, float cy, boolean vertical, int side) {

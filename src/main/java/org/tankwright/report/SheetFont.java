@@ -1,5 +1,8 @@
 package org.tankwright.report;
 
+import org.apache.fontbox.ttf.TTFParser;
+import org.apache.fontbox.ttf.TrueTypeFont;
+import org.apache.pdfbox.io.RandomAccessReadBuffer;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.font.PDType0Font;
 
@@ -21,18 +24,33 @@ final class SheetFont {
             '\u2192', "->", '\u2264', "<=", '\u2265', ">=", '\u221A', "sqrt", '\u2212', "-",
             '\u2248', "~", '\u00D7', "x", '\u2026', "...", '\u2126', "\u03A9");
 
+    private static byte[] fontBytes;
+
     private final PDType0Font font;
+    private final Map<Character, Float> widths = new HashMap<>();
     private final Map<Character, Boolean> covered = new HashMap<>();
 
     SheetFont(PDDocument doc) {
-        try (InputStream in = SheetFont.class.getResourceAsStream(RESOURCE)) {
-            if (in == null) {
-                throw new IllegalStateException("the PDF library's bundled font " + RESOURCE + " is missing");
-            }
-            font = PDType0Font.load(doc, in, true);
+        try {
+            TrueTypeFont ttf = new TTFParser().parse(new RandomAccessReadBuffer(bytes()));
+            // Latin text needs no glyph substitution; without the table PDFBox skips its per-string ligature pass.
+            ttf.getTableMap().remove("GSUB");
+            font = PDType0Font.load(doc, ttf, true);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot load the sheet's font", e);
         }
+    }
+
+    private static synchronized byte[] bytes() throws IOException {
+        if (fontBytes == null) {
+            try (InputStream in = SheetFont.class.getResourceAsStream(RESOURCE)) {
+                if (in == null) {
+                    throw new IllegalStateException("the PDF library's bundled font " + RESOURCE + " is missing");
+                }
+                fontBytes = in.readAllBytes();
+            }
+        }
+        return fontBytes;
     }
 
     PDType0Font pdf() {
@@ -58,10 +76,18 @@ final class SheetFont {
 
     /** Width of already printable text at {@code size} points. */
     float width(String printable, float size) {
+        float w = 0;
+        for (int i = 0; i < printable.length(); i++) {
+            w += widths.computeIfAbsent(printable.charAt(i), this::glyphWidth);
+        }
+        return w / 1000f * size;
+    }
+
+    private float glyphWidth(char c) {
         try {
-            return font.getStringWidth(printable) / 1000f * size;
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
+            return font.getStringWidth(String.valueOf(c));
+        } catch (IOException | IllegalArgumentException e) {
+            return 500f;
         }
     }
 

@@ -90,6 +90,15 @@ public final class TuningSheet {
         }
     }
 
+    /** A long hex string in groups of eight, so that it wraps between groups and reads aloud in pieces. */
+    static String grouped(String hex) {
+        StringBuilder sb = new StringBuilder();
+        for (int i = 0; i < hex.length(); i += 8) {
+            sb.append(i == 0 ? "" : " ").append(hex, i, Math.min(hex.length(), i + 8));
+        }
+        return sb.toString();
+    }
+
     private static void header(PageFlow flow, AnalysisResult r, SheetInfo info) {
         Design d = r.design();
         flow.title("Tuning sheet: " + d.name());
@@ -98,7 +107,7 @@ public final class TuningSheet {
         flow.space(3);
         Table t = new Table(new String[] {"Made", "Tool", "Design file", "SHA-256 of the design (as saved)"},
                 new float[] {1.1f, 1.1f, 2.2f, 4.6f});
-        t.row(info.date(), "Tankwright " + info.toolVersion(), info.fileName(), checksum(d));
+        t.row(info.date(), "Tankwright " + info.toolVersion(), info.fileName(), grouped(checksum(d)));
         flow.table(t);
         if (d.description() != null && !d.description().isBlank()) {
             flow.note(d.description());
