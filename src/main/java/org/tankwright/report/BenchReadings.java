@@ -96,8 +96,8 @@ public final class BenchReadings {
             }
         }
         double scale = maxPeak > LOW_STEP_PEAK ? LOW_STEP_PEAK / maxPeak : 1.0;
-        double drive = niceFloor(full * scale);
-        scale = Fmt.has(full) && full > 0 ? drive / full : scale;
+        double drive = scale < 1 ? niceFloor(full * scale) : full;
+        scale = scale < 1 && Fmt.has(full) && full > 0 ? drive / full : scale;
         HeaterReport h = r.heater();
         double f0 = resonance(n);
 

@@ -4,6 +4,7 @@ import com.google.gson.JsonObject;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
 import org.apache.pdfbox.text.TextPosition;
+import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.EnumSource;
@@ -19,8 +20,10 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.HexFormat;
 import java.util.List;
+import java.util.Map;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -38,31 +41,41 @@ class TuningSheetTest {
         return s.replace('\u00A0', ' ').replaceAll("\\s+", " ");
     }
 
-    static PDDocument sheet(AnalysisResult r, Paper p) {
-        return TuningSheet.build(r, p, INFO);
+    private static final Map<String, PDDocument> BUILT = new HashMap<>();
+
+    /** The sheet of a result on a paper, built once per test class (the documents are read, never changed). */
+    static synchronized PDDocument sheet(AnalysisResult r, Paper p) {
+        return BUILT.computeIfAbsent(r.design().name() + "/" + r.findings().size() + "/" + p, k -> TuningSheet.build(r, p, INFO));
+    }
+
+    @AfterAll
+    static void close() throws IOException {
+        for (PDDocument d : BUILT.values()) {
+            d.close();
+        }
+        BUILT.clear();
     }
 
     @ParameterizedTest
     @EnumSource(Paper.class)
     void linkSheetHasEverySectionInOrderWithTheSafetyBoxFirst(Paper paper) throws IOException {
-        try (PDDocument doc = sheet(ReportFixtures.ssLinkFull(), paper)) {
-            String t = text(doc);
-            String[] order = {"Tuning sheet: Fixture SS pad", "SAFETY", "DANGER TW-HV-01", "WARNING TW-EX-02",
-                "Follow your local electrical codes", "Tuned network", "Coil L1", "Coil L2", "Capacitor banks: build list",
-                "Element stresses", "Expected bench readings", "Step 1: low voltage into a dummy load", "Step 2: full power",
-                "Trip levels", "Bench procedure", "Re-tune table", "Plots", "Input impedance and phase against frequency",
-                "Capacitor voltage against frequency", "Coupling k against lateral offset", "Field near the coils",
-                "Findings of the checks", "Local codes and licensed practice"};
-            int at = -1;
-            for (String s : order) {
-                int i = t.indexOf(s, at + 1);
-                assertTrue(i > at, "'" + s + "' comes after the previous section");
-                at = i;
-            }
-            assertTrue(t.contains("page 1 of " + doc.getNumberOfPages()));
-            assertTrue(t.contains("page " + doc.getNumberOfPages() + " of " + doc.getNumberOfPages()));
-            assertEquals(paper.size().getWidth(), doc.getPage(0).getMediaBox().getWidth(), 0.01);
+        PDDocument doc = sheet(ReportFixtures.ssLinkFull(), paper);
+        String t = text(doc);
+        String[] order = {"Tuning sheet: Fixture SS pad", "SAFETY", "DANGER TW-HV-01", "WARNING TW-EX-02",
+            "Follow your local electrical codes", "Tuned network", "Coil L1", "Coil L2", "Capacitor banks: build list",
+            "Element stresses", "Expected bench readings", "Step 1: low voltage into a dummy load", "Step 2: full power",
+            "Trip levels", "Bench procedure", "Re-tune table", "Plots", "Input impedance and phase against frequency",
+            "Capacitor voltage against frequency", "Coupling k against lateral offset", "Field near the coils",
+            "Findings of the checks", "Local codes and licensed practice"};
+        int at = -1;
+        for (String s : order) {
+            int i = t.indexOf(s, at + 1);
+            assertTrue(i > at, "'" + s + "' comes after the previous section");
+            at = i;
         }
+        assertTrue(t.contains("page 1 of " + doc.getNumberOfPages()));
+        assertTrue(t.contains("page " + doc.getNumberOfPages() + " of " + doc.getNumberOfPages()));
+        assertEquals(paper.size().getWidth(), doc.getPage(0).getMediaBox().getWidth(), 0.01);
     }
 
     @Test
@@ -75,26 +88,25 @@ class TuningSheetTest {
         JsonObject bank1 = j.getAsJsonArray("banks").get(0).getAsJsonObject();
         JsonObject c1 = j.getAsJsonArray("stresses").get(0).getAsJsonObject();
         JsonObject env = j.getAsJsonObject("envelope");
-        try (PDDocument doc = sheet(r, Paper.A4)) {
-            String t = text(doc);
-            printed(t, net.get("frequency_Hz").getAsDouble(), Dimension.FREQUENCY, Fmt.BUILD);
-            printed(t, net.get("source_current_A").getAsDouble(), Dimension.CURRENT, Fmt.READING);
-            printed(t, net.get("power_out_W").getAsDouble(), Dimension.POWER, Fmt.READING);
-            printed(t, net.get("efficiency").getAsDouble(), Dimension.FRACTION, Fmt.READING);
-            printed(t, net.get("c1_textbook_F").getAsDouble(), Dimension.CAPACITANCE, Fmt.BUILD);
-            printed(t, coil1.get("inductance_H").getAsDouble(), Dimension.INDUCTANCE, Fmt.BUILD);
-            printed(t, coil2.get("inductance_H").getAsDouble(), Dimension.INDUCTANCE, Fmt.BUILD);
-            printed(t, coil1.get("resistance_ac_ohm").getAsDouble(), Dimension.RESISTANCE, Fmt.READING);
-            printed(t, coil1.get("self_resonance_Hz").getAsDouble(), Dimension.FREQUENCY, Fmt.READING);
-            printed(t, bank1.get("capacitance_F").getAsDouble(), Dimension.CAPACITANCE, Fmt.BUILD);
-            printed(t, bank1.get("part_voltage_peak_V").getAsDouble(), Dimension.VOLTAGE, Fmt.READING);
-            printed(t, bank1.get("stored_energy_J").getAsDouble(), Dimension.ENERGY, Fmt.READING);
-            printed(t, c1.get("voltage_rms_V").getAsDouble(), Dimension.VOLTAGE, Fmt.READING);
-            printed(t, env.get("trip_current_A").getAsDouble(), Dimension.CURRENT, Fmt.READING);
-            printed(t, j.getAsJsonObject("exposure").get("b_rms_T").getAsDouble(), Dimension.FLUX_DENSITY, Fmt.READING);
-            assertTrue(t.contains("k 0.2500"), "coupling on the schematic");
-            assertTrue(t.contains(TuningSheet.grouped(TuningSheet.checksum(r.design()))), "checksum in groups of eight");
-        }
+        PDDocument doc = sheet(r, Paper.A4);
+        String t = text(doc);
+        printed(t, net.get("frequency_Hz").getAsDouble(), Dimension.FREQUENCY, Fmt.BUILD);
+        printed(t, net.get("source_current_A").getAsDouble(), Dimension.CURRENT, Fmt.READING);
+        printed(t, net.get("power_out_W").getAsDouble(), Dimension.POWER, Fmt.READING);
+        printed(t, net.get("efficiency").getAsDouble(), Dimension.FRACTION, Fmt.READING);
+        printed(t, net.get("c1_textbook_F").getAsDouble(), Dimension.CAPACITANCE, Fmt.BUILD);
+        printed(t, coil1.get("inductance_H").getAsDouble(), Dimension.INDUCTANCE, Fmt.BUILD);
+        printed(t, coil2.get("inductance_H").getAsDouble(), Dimension.INDUCTANCE, Fmt.BUILD);
+        printed(t, coil1.get("resistance_ac_ohm").getAsDouble(), Dimension.RESISTANCE, Fmt.READING);
+        printed(t, coil1.get("self_resonance_Hz").getAsDouble(), Dimension.FREQUENCY, Fmt.READING);
+        printed(t, bank1.get("capacitance_F").getAsDouble(), Dimension.CAPACITANCE, Fmt.BUILD);
+        printed(t, bank1.get("part_voltage_peak_V").getAsDouble(), Dimension.VOLTAGE, Fmt.READING);
+        printed(t, bank1.get("stored_energy_J").getAsDouble(), Dimension.ENERGY, Fmt.READING);
+        printed(t, c1.get("voltage_rms_V").getAsDouble(), Dimension.VOLTAGE, Fmt.READING);
+        printed(t, env.get("trip_current_A").getAsDouble(), Dimension.CURRENT, Fmt.READING);
+        printed(t, j.getAsJsonObject("exposure").get("b_rms_T").getAsDouble(), Dimension.FLUX_DENSITY, Fmt.READING);
+        assertTrue(t.contains("k 0.2500"), "coupling on the schematic");
+        assertTrue(t.contains(TuningSheet.grouped(TuningSheet.checksum(r.design()))), "checksum in groups of eight");
     }
 
     /** The value, formatted as the sheet prints it, is on the sheet and reads back within its printed precision. */
@@ -118,35 +130,33 @@ class TuningSheetTest {
     @EnumSource(Paper.class)
     void heaterSheetHasColdAndHotColumnsAndNoLinkSections(Paper paper) throws IOException {
         AnalysisResult r = ResultFixtures.heater();
-        try (PDDocument doc = sheet(r, paper)) {
-            String t = text(doc);
-            assertTrue(t.contains("Heater: cold and hot operating points"));
-            assertTrue(t.contains("Expected cold Expected hot"));
-            assertTrue(t.contains("Step 2: full power, workpiece cold and then hot"));
-            assertTrue(t.contains(Quantities.format(r.heater().hot().resonantFrequency(), Dimension.FREQUENCY, Fmt.BUILD)));
-            assertTrue(t.contains(Quantities.format(r.heater().cold().power(), Dimension.POWER, Fmt.READING)));
-            assertTrue(t.contains("I1 source"), "a current-fed tank shows a current source");
-            for (String absent : new String[] {"Coil L2", "Trip levels", "Plots", "Findings of the checks", "L1,short", "split"}) {
-                assertFalse(t.contains(absent), absent + " does not apply to a heater");
-            }
-            assertTrue(t.contains("SAFETY"));
+        PDDocument doc = sheet(r, paper);
+        String t = text(doc);
+        assertTrue(t.contains("Heater: cold and hot operating points"));
+        assertTrue(t.contains("Expected cold Expected hot"));
+        assertTrue(t.contains("Step 2: full power, workpiece cold and then hot"));
+        assertTrue(t.contains(Quantities.format(r.heater().hot().resonantFrequency(), Dimension.FREQUENCY, Fmt.BUILD)));
+        assertTrue(t.contains(Quantities.format(r.heater().cold().power(), Dimension.POWER, Fmt.READING)));
+        assertTrue(t.contains("I1 source"), "a current-fed tank shows a current source");
+        for (String absent : new String[] {"Coil L2", "Trip levels", "Plots", "Findings of the checks", "L1,short", "split"}) {
+            assertFalse(t.contains(absent), absent + " does not apply to a heater");
         }
+        assertTrue(t.contains("SAFETY"));
     }
 
     @ParameterizedTest
     @EnumSource(Paper.class)
     void singleTankSheetLeavesOutWhatDoesNotApply(Paper paper) throws IOException {
         AnalysisResult r = ResultFixtures.measuredTank();
-        try (PDDocument doc = sheet(r, paper)) {
-            String t = text(doc);
-            for (String present : new String[] {"SAFETY", "Tuned network", "Coil L1", "Expected bench readings", "Re-tune table",
-                "Local codes and licensed practice"}) {
-                assertTrue(t.contains(present), present);
-            }
-            for (String absent : new String[] {"Coil L2", "Capacitor banks", "Trip levels", "Plots", "Heater", "Field near",
-                "dummy load", "Findings of the checks"}) {
-                assertFalse(t.contains(absent), absent + " does not apply to a measured series tank");
-            }
+        PDDocument doc = sheet(r, paper);
+        String t = text(doc);
+        for (String present : new String[] {"SAFETY", "Tuned network", "Coil L1", "Expected bench readings", "Re-tune table",
+            "Local codes and licensed practice"}) {
+            assertTrue(t.contains(present), present);
+        }
+        for (String absent : new String[] {"Coil L2", "Capacitor banks", "Trip levels", "Plots", "Heater", "Field near",
+            "dummy load", "Findings of the checks"}) {
+            assertFalse(t.contains(absent), absent + " does not apply to a measured series tank");
         }
     }
 
@@ -154,42 +164,41 @@ class TuningSheetTest {
     @EnumSource(Paper.class)
     void everyGlyphLiesInsideThePageMarginsAndNoPageIsBlank(Paper paper) throws IOException {
         for (AnalysisResult r : List.of(ReportFixtures.ssLinkFull(), ResultFixtures.heater(), ResultFixtures.measuredTank())) {
-            try (PDDocument doc = sheet(r, paper)) {
-                float w = paper.size().getWidth();
-                float h = paper.size().getHeight();
-                List<String> outside = new ArrayList<>();
-                List<Integer> perPage = new ArrayList<>();
-                PDFTextStripper s = new PDFTextStripper() {
-                    int count;
+            PDDocument doc = sheet(r, paper);
+            float w = paper.size().getWidth();
+            float h = paper.size().getHeight();
+            List<String> outside = new ArrayList<>();
+            List<Integer> perPage = new ArrayList<>();
+            PDFTextStripper s = new PDFTextStripper() {
+                int count;
 
-                    @Override
-                    protected void startPage(org.apache.pdfbox.pdmodel.PDPage page) {
-                        count = 0;
-                    }
+                @Override
+                protected void startPage(org.apache.pdfbox.pdmodel.PDPage page) {
+                    count = 0;
+                }
 
-                    @Override
-                    protected void endPage(org.apache.pdfbox.pdmodel.PDPage page) {
-                        perPage.add(count);
-                    }
+                @Override
+                protected void endPage(org.apache.pdfbox.pdmodel.PDPage page) {
+                    perPage.add(count);
+                }
 
-                    @Override
-                    protected void writeString(String text, List<TextPosition> glyphs) {
-                        for (TextPosition g : glyphs) {
-                            count++;
-                            if (g.getXDirAdj() < 30 || g.getXDirAdj() + g.getWidthDirAdj() > w - 30
-                                    || g.getYDirAdj() < 30 || g.getYDirAdj() > h - 20) {
-                                outside.add(g.getUnicode() + "@" + g.getXDirAdj() + "," + g.getYDirAdj());
-                            }
+                @Override
+                protected void writeString(String text, List<TextPosition> glyphs) {
+                    for (TextPosition g : glyphs) {
+                        count++;
+                        if (g.getXDirAdj() < 30 || g.getXDirAdj() + g.getWidthDirAdj() > w - 30
+                                || g.getYDirAdj() < 30 || g.getYDirAdj() > h - 20) {
+                            outside.add(g.getUnicode() + "@" + g.getXDirAdj() + "," + g.getYDirAdj());
                         }
                     }
-                };
-                s.getText(doc);
-                assertEquals(List.of(), outside, "glyphs outside the margins of " + r.design().name());
-                assertEquals(doc.getNumberOfPages(), perPage.size());
-                for (int i = 0; i < perPage.size(); i++) {
-                    // a page with only its running head and foot holds well under 120 glyphs
-                    assertTrue(perPage.get(i) > 120, "page " + (i + 1) + " of " + r.design().name() + " has content");
                 }
+            };
+            s.getText(doc);
+            assertEquals(List.of(), outside, "glyphs outside the margins of " + r.design().name());
+            assertEquals(doc.getNumberOfPages(), perPage.size());
+            for (int i = 0; i < perPage.size(); i++) {
+                // a page with only its running head and foot holds well under 120 glyphs
+                assertTrue(perPage.get(i) > 120, "page " + (i + 1) + " of " + r.design().name() + " has content");
             }
         }
     }
