@@ -14,6 +14,7 @@ import picocli.CommandLine.Command;
                 ValidateCommand.class,
                 SheetCommand.class,
                 ExportCommand.class,
+                CheckCommand.class,
         })
 public final class Main implements Runnable {
 

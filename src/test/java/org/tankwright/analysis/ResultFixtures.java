@@ -93,7 +93,7 @@ public final class ResultFixtures {
         /** Capacitor part: value is derived; ratings (derated, peak volts and rms amps). */
         public int seriesCount = 4;
         public int parallelCount = 4;
-        public double partVoltageRating = 1200;
+        public double partVoltageRating = 1600;
         public double partCurrentRating = 12;
         public double partDvDtRating = 2e9;
         public double partEsl = 15e-9;
