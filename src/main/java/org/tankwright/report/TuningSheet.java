@@ -5,6 +5,7 @@ import org.apache.pdfbox.pdmodel.PDDocumentInformation;
 import org.tankwright.analysis.AnalysisResult;
 import org.tankwright.analysis.ElementStress;
 import org.tankwright.analysis.BankReport;
+import org.tankwright.checks.Checks;
 import org.tankwright.checks.Finding;
 import org.tankwright.checks.Severity;
 import org.tankwright.design.Design;
@@ -31,10 +32,9 @@ import java.util.List;
  * local codes. Sections that do not apply to a design are left out, never printed empty.
  */
 public final class TuningSheet {
-    /** The deferral printed in the safety box and at the end of every sheet. */
-    public static final String DEFERRAL = "This sheet is an engineering estimate made by a program, not a safety "
-            + "assessment or a certification. Follow your local electrical codes and licensed practice; have work on "
-            + "mains-connected, high-voltage or high-power equipment done or checked by a qualified person.";
+    /** What the sheet is, printed before the deferral to local codes ({@link Finding#DEFERRAL}). */
+    public static final String ESTIMATE = "This sheet is an engineering estimate made by a program from a model of the "
+            + "design, not a safety assessment or a certification.";
     /** How many of the most severe findings the safety box repeats. */
     static final int BOX_FINDINGS = 5;
     private static final Color DANGER_RED = new Color(0xb0, 0x10, 0x10);
@@ -67,7 +67,7 @@ public final class TuningSheet {
             findings(flow, r);
             notes(flow, r);
             flow.heading("Local codes and licensed practice");
-            flow.paragraph(DEFERRAL);
+            flow.paragraph(ESTIMATE + " " + Finding.DEFERRAL);
             flow.finish("Tankwright " + info.toolVersion() + " \u00B7 " + d.name() + " \u00B7 " + info.date());
         } catch (RuntimeException e) {
             try {
@@ -123,8 +123,8 @@ public final class TuningSheet {
                 .sorted((a, b) -> a.severity().compareTo(b.severity()))
                 .limit(BOX_FINDINGS).toList();
         for (Finding f : severe) {
-            lines.add(f.severity().name() + " " + f.id() + ": " + f.message()
-                    + (f.action() == null || f.action().isBlank() ? "" : " \u2014 " + f.action()));
+            String action = f.action() == null ? "" : f.action().replace(Finding.DEFERRAL, "").strip();
+            lines.add(f.severity().name() + " " + f.id() + ": " + f.message() + (action.isEmpty() ? "" : " \u2014 " + action));
         }
         long more = r.findings().stream().filter(f -> f.severity() == Severity.DANGER || f.severity() == Severity.WARNING)
                 .count() - severe.size();
@@ -152,20 +152,9 @@ public final class TuningSheet {
             lines.add("The capacitor banks store " + Fmt.reading(energy, Dimension.ENERGY)
                     + " at peak voltage: discharge them and measure before touching.");
         }
-        lines.addAll(cautions());
-        lines.add(DEFERRAL);
+        lines.add(ESTIMATE);
+        lines.addAll(Checks.cautions());
         flow.box("SAFETY \u2014 read before building or powering", lines, DANGER_RED, DANGER_RED, Color.WHITE);
-    }
-
-    /** The general cautions of resonant power work. */
-    static List<String> cautions() {
-        return List.of(
-                "Resonant capacitors and coils carry many times the supply voltage: treat every node of the tank as live "
-                        + "whenever the source is on, and only change parts with the source off and the banks discharged.",
-                "Strong magnetic fields heat metal near the coils (rings, watches, tools) and can disturb implanted "
-                        + "medical devices: keep people with implants away and remove metal from hands and wrists.",
-                "Coils, capacitors and the workpiece get hot: watch their temperature while ramping up, and allow them to "
-                        + "cool before touching.");
     }
 
     private static void findings(PageFlow flow, AnalysisResult r) {

@@ -10,6 +10,8 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.EnumSource;
 import org.tankwright.analysis.AnalysisResult;
 import org.tankwright.analysis.ResultFixtures;
+import org.tankwright.checks.Checks;
+import org.tankwright.checks.Finding;
 import org.tankwright.design.DesignFiles;
 import org.tankwright.units.Dimension;
 import org.tankwright.units.Quantities;
@@ -115,6 +117,20 @@ class TuningSheetTest {
         assertTrue(text.contains(s), s + " is on the sheet");
         double back = d == Dimension.FRACTION ? Double.parseDouble(s.replace(" %", "")) / 100 : Quantities.parse(s, d);
         assertEquals(json, back, Math.abs(json) * 0.5 * Math.pow(10, 1 - sig) * 1.0001, s + " against " + json);
+    }
+
+    @Test
+    void safetyBoxCarriesEveryGeneralCautionAndTheDeferralBeforeTheFirstSection() throws IOException {
+        for (AnalysisResult r : List.of(ReportFixtures.ssLinkFull(), ResultFixtures.measuredTank())) {
+            String t = text(sheet(r, Paper.A4));
+            int firstSection = t.indexOf("Tuned network");
+            for (String caution : Checks.cautions()) {
+                int at = t.indexOf(normal(caution));
+                assertTrue(at > 0 && at < firstSection, "caution in the safety box: " + caution);
+            }
+            assertTrue(t.indexOf(Finding.DEFERRAL) < firstSection);
+            assertTrue(t.lastIndexOf(Finding.DEFERRAL) > t.indexOf("Local codes and licensed practice"), "and again at the end");
+        }
     }
 
     @Test
