@@ -54,7 +54,7 @@ final class NetworkSchematic {
             primary.add(new Rail(net.part("C1"), capLabel("C1")));
         }
         // a vertical coil bulges toward the other coil: screen +x is local −y when rotated
-        primary.add(new Branch(net.part("L1"), coilLabel("1"), link || parallel1, -1));
+        primary.add(new Branch(net.part("L1"), coilLabel("1"), link, -1));
         if (link) {
             secondary.add(new Branch(net.part("L2"), coilLabel("2"), false, 1));
             boolean parallel2 = t == Topology.SP || t == Topology.PP;
@@ -124,7 +124,7 @@ final class NetworkSchematic {
                 float w = Math.max(Symbols.LENGTH + 10, width(r.label(), fm) + 8);
                 out.add(new float[] {w / 2, 0, w / 2});
             } else if (o instanceof Branch b) {
-                float lw = width(b.label(), fm) + 6;
+                float lw = width(b.label(), fm) + 14;
                 out.add(b.labelLeft() ? new float[] {lw, SYMBOL_HALF_WIDTH, 6} : new float[] {6, SYMBOL_HALF_WIDTH, lw});
             }
         }

@@ -131,7 +131,10 @@ public final class TuningSheet {
         if (more > 0) {
             lines.add(more + " more danger and warning findings are listed under Findings.");
         }
-        if (severe.isEmpty()) {
+        if (r.network() == null) {
+            lines.add("The analysis did not produce a tuned network for this design, so the checks could not judge "
+                    + "its voltages and currents. The cautions below apply all the same.");
+        } else if (severe.isEmpty()) {
             lines.add("The checks found no danger or warning for this design. The cautions below still apply.");
         }
         ElementStress highest = null;
