@@ -67,7 +67,8 @@ final class BuildSections {
                 + (n.inputReactance() < 0 ? "\u2212" : "+") + " j" + Fmt.reading(Math.abs(n.inputReactance()), Dimension.RESISTANCE)});
         cells.add(new String[] {"Input phase (+ inductive)", Fmt.reading(n.inputPhaseDeg(), Dimension.ANGLE)});
         cells.add(new String[] {"Power from the source", Fmt.reading(n.powerIn(), Dimension.POWER)});
-        cells.add(new String[] {"Power into the load", Fmt.reading(n.powerOut(), Dimension.POWER)});
+        cells.add(new String[] {r.heater() != null ? "Power into the workpiece" : "Power into the load",
+                Fmt.reading(n.powerOut(), Dimension.POWER)});
         cells.add(new String[] {"Efficiency", Fmt.percent(n.efficiency())});
         if (Fmt.has(n.outputVoltage())) {
             cells.add(new String[] {"Output voltage", Fmt.reading(n.outputVoltage(), Dimension.VOLTAGE)});

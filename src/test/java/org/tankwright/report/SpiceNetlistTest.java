@@ -2,6 +2,11 @@ package org.tankwright.report;
 
 import org.hipparchus.complex.Complex;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.EnumSource;
+import org.tankwright.design.Enums.Topology;
+
+import java.util.Map;
 import org.tankwright.analysis.AnalysisResult;
 import org.tankwright.analysis.CouplingReport;
 import org.tankwright.analysis.ElementStress;
@@ -62,6 +67,33 @@ class SpiceNetlistTest {
         Complex vl = s.v(n.elements().get("RL").a());
         double pOut = vl.norm() * vl.norm() / n.elements().get("RL").value();
         assertEquals(r.network().powerOut(), pOut, r.network().powerOut() * 0.02, "load power");
+    }
+
+    @ParameterizedTest
+    @EnumSource(value = Topology.class, names = {"SS", "SP", "PS", "PP"})
+    void eachTopologyPutsTheCapacitorsWhereItsLettersSay(Topology t) {
+        ResultFixtures.Link p = new ResultFixtures.Link();
+        p.topology = t;
+        NetlistParser.Netlist n = NetlistParser.parse(SpiceNetlist.write(TunedNetwork.of(p.build()), t.token()));
+        Map<String, NetlistParser.Element> e = n.elements();
+        int top = e.get("RS").b();
+        boolean parallel1 = t == Topology.PS || t == Topology.PP;
+        boolean parallel2 = t == Topology.SP || t == Topology.PP;
+        // P: the bank (with its ESR) spans the coil's terminals; S: the bank sits between source and coil
+        assertEquals(top, e.get("C1").a());
+        assertEquals(parallel1, e.get("RC1").b() == 0, "C1 branch ends on the reference node");
+        assertEquals(parallel1 ? top : e.get("RC1").b(), e.get("L1").a(), "L1 starts where C1's branch does (P) or ends (S)");
+        assertEquals(0, e.get("R1").b());
+        int out = e.get("RL").a();
+        assertEquals(parallel2 ? out : e.get("RC2").b(), parallel2 ? e.get("C2").a() : out, "C2 across the load (P) or in the loop (S)");
+        assertEquals(parallel2, e.get("RC2").b() == 0);
+        assertEquals(0, e.get("RL").b());
+        assertTrue(Double.isFinite(NetlistSolver.solve(n, n.acStart()).v(out).norm()), "the netlist solves");
+        try (var doc = TuningSheet.build(p.build(), Paper.A4, new SheetInfo("f", "2026-12-02", "test"))) {
+            assertTrue(TuningSheetTest.text(doc).contains(t.token() + " compensation"));
+        } catch (java.io.IOException ex) {
+            throw new java.io.UncheckedIOException(ex);
+        }
     }
 
     @Test
