@@ -54,13 +54,19 @@ final class SheetPlots {
                     "voltage (rms)", Dimension.VOLTAGE, curves(capV), x.markerX(), "operating", style));
         }
         List<Series> kOffset = pick(cpl, s -> s.xDim() == Dimension.LENGTH && mentions(s, "offset")
-                && (s.yDim() == Dimension.DIMENSIONLESS || s.yDim() == Dimension.FRACTION) && mentions(s, "k"));
+                && s.yDim() == Dimension.DIMENSIONLESS && isCoupling(s));
         if (!kOffset.isEmpty()) {
             Series x = kOffset.get(0);
             out.add(XYFigures.lines("Coupling k against lateral offset", x.xLabel(), Dimension.LENGTH, false,
                     x.yLabel(), Dimension.DIMENSIONLESS, curves(kOffset), x.markerX(), "nominal", style));
         }
         return out;
+    }
+
+    /** A series of the coupling coefficient: its y is named k, or its id or title says coupling. */
+    private static boolean isCoupling(Series s) {
+        return "k".equalsIgnoreCase(s.yLabel().strip()) || s.id().toLowerCase(Locale.ROOT).startsWith("k-")
+                || mentions(s, "coupling");
     }
 
     private static boolean mentions(Series s, String word) {

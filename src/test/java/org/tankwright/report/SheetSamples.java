@@ -10,13 +10,24 @@ import java.nio.file.Path;
 
 /**
  * Writes sample sheets (fixtures and presets, A4 and Letter) into a folder, for looking at them
- * (render with {@code pdftoppm -png -r 60}). Not a test: {@code main(folder)}.
+ * (render with {@code pdftoppm -png -r 60}). Not a test: {@code main(folder)}; {@code main("--docs")}
+ * rewrites the committed samples in {@code docs/samples}.
  */
 public final class SheetSamples {
     private SheetSamples() {
     }
 
     public static void main(String[] args) throws Exception {
+        if (args.length > 0 && args[0].equals("--docs")) {
+            // the committed samples: a link on A4 and a heater on Letter
+            Path docs = Path.of("docs", "samples");
+            Files.createDirectories(docs);
+            TuningSheet.write(ReportFixtures.ssLinkFull(), docs.resolve("link-sheet-a4.pdf"), Paper.A4,
+                    new SheetInfo("fixture: SS link", "2026-12-02", "0.1.0"));
+            TuningSheet.write(ResultFixtures.heater(), docs.resolve("heater-sheet-letter.pdf"), Paper.LETTER,
+                    new SheetInfo("fixture: bar heater", "2026-12-02", "0.1.0"));
+            return;
+        }
         Path dir = Path.of(args.length > 0 ? args[0] : "target/sheets");
         Files.createDirectories(dir);
         SheetInfo info = new SheetInfo("fixture", "2026-12-02", "dev");
