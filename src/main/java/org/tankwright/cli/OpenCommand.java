@@ -5,6 +5,7 @@ import org.tankwright.analysis.Presets;
 import org.tankwright.analysis.Summary;
 import org.tankwright.design.Design;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 import java.awt.GraphicsEnvironment;
@@ -22,14 +23,30 @@ public final class OpenCommand implements Callable<Integer> {
     @Parameters(arity = "0..1", paramLabel = "FILE", description = "design file to open")
     Path file;
 
+    @Option(names = "--snapshot", paramLabel = "PNG",
+            description = "Lay the window out, wait until the analysis is shown, write a PNG of the whole window and exit (needs a display, e.g. xvfb-run).")
+    Path snapshot;
+
+    @Option(names = "--theme", paramLabel = "light|dark", description = "Window theme (default: the remembered one; light for --snapshot).")
+    String theme;
+
+    @Option(names = "--size", paramLabel = "WxH", description = "Window size in pixels, e.g. 1440x900.")
+    String size;
+
     @Override
     public Integer call() {
         Design design = file == null ? Presets.demo() : DesignArgs.load(file);
+        org.tankwright.ui.Workbench.Options opts = WorkbenchOptions.parse(theme, size, snapshot);
+        if (snapshot != null) {
+            return WorkbenchOptions.snapshot(file, design, opts);
+        }
         if (GraphicsEnvironment.isHeadless()) {
             return printSummary(design, "No display is available");
         }
         try {
-            org.tankwright.ui.Workbench.launch(file, design);
+            org.tankwright.ui.Workbench.launch(file, design, opts);
+        } catch (java.io.IOException e) {
+            throw new ExitCodes.UserError(ExitCodes.INVALID_INPUT, e.getMessage());
         } catch (java.awt.AWTError | java.awt.HeadlessException | UnsatisfiedLinkError e) {
             return printSummary(design, "The display cannot be opened (" + e.getMessage() + ")");
         }

@@ -127,6 +127,12 @@ public final class EditHistory<T> {
         savedAt = cursor;
     }
 
+    /** Marks the current state as not on disk (a design recovered after a crash). */
+    public void markUnsaved() {
+        merging = false;
+        savedAt = -1;
+    }
+
     /** True when the current state differs from the one last saved. */
     public boolean isDirty() {
         return savedAt != cursor;

@@ -51,7 +51,7 @@ public final class StatusBar extends JPanel {
 
     /** Shows how many findings of each weight the result has. */
     public void findings(int dangers, int warnings, int notes) {
-        findings.setText(dangers + " danger · " + warnings + " warning · " + notes + " note");
+        findings.setText(dangers + " danger · " + warnings + " warning · " + notes + " caution or notice");
     }
 
     /** Shows the file name and whether it has unsaved edits. */

@@ -1,34 +1,191 @@
 package org.tankwright.ui;
 
-import com.formdev.flatlaf.FlatLightLaf;
-import org.tankwright.analysis.Analysis;
-import org.tankwright.analysis.Summary;
-import org.tankwright.design.Design;
-
-import javax.swing.JFrame;
-import javax.swing.JScrollPane;
-import javax.swing.JTextArea;
-import javax.swing.SwingUtilities;
-import java.awt.Font;
+import java.awt.Dimension;
+import java.awt.image.BufferedImage;
+import java.io.IOException;
+import java.lang.reflect.InvocationTargetException;
 import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.TimeUnit;
+import java.util.function.Function;
+import javax.swing.JOptionPane;
+import javax.swing.SwingUtilities;
+import org.tankwright.analysis.Analysis;
+import org.tankwright.analysis.AnalysisResult;
+import org.tankwright.design.Design;
+import org.tankwright.ui.files.RecoveryFolder;
+import org.tankwright.ui.model.OpenDesign;
+import org.tankwright.ui.model.Workspace;
 
-/** The workbench window's entry point. */
+/** The workbench window's entry point, called by {@code tankwright open}. */
 public final class Workbench {
+
+    /** Default window size. */
+    public static final Dimension DEFAULT_SIZE = new Dimension(1440, 900);
+
+    /**
+     * How to open the window.
+     *
+     * @param theme    light or dark; null uses the remembered one
+     * @param snapshot when set, lay the window out, wait for the analysis, write a PNG here and close
+     * @param size     window size; null for {@link #DEFAULT_SIZE}
+     */
+    public record Options(Theme theme, Path snapshot, Dimension size) {
+        public static final Options DEFAULT = new Options(null, null, null);
+
+        Dimension sizeOrDefault() {
+            return size != null ? size : DEFAULT_SIZE;
+        }
+    }
+
     private Workbench() {
     }
 
-    /** Opens the window on {@code design} (loaded from {@code file}, or the demo when file is null). */
+    /** Opens the window on {@code design} (read from {@code file}, or the demo when file is null) and returns when it is closed. */
     public static void launch(Path file, Design design) {
-        SwingUtilities.invokeLater(() -> {
-            FlatLightLaf.setup();
-            JFrame f = new JFrame("Tankwright — " + design.name());
-            JTextArea text = new JTextArea(Summary.text(Analysis.run(design)));
-            text.setEditable(false);
-            text.setFont(new Font(Font.MONOSPACED, Font.PLAIN, 13));
-            f.add(new JScrollPane(text));
-            f.setSize(900, 600);
-            f.setDefaultCloseOperation(JFrame.EXIT_ON_CLOSE);
-            f.setVisible(true);
+        try {
+            launch(file, design, Options.DEFAULT);
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e); // only a snapshot writes files here
+        }
+    }
+
+    /**
+     * Opens the window on {@code design} and blocks until it is closed, or, with
+     * {@link Options#snapshot()}, until the picture is written. Returns an exit status (0 ok).
+     *
+     * @throws IOException when the snapshot cannot be written
+     */
+    public static int launch(Path file, Design design, Options opts) throws IOException {
+        UserSettings settings = new UserSettings(UserSettings.defaultFolder());
+        if (opts.snapshot() != null) {
+            BufferedImage img = snapshot(design, file, opts.theme() != null ? opts.theme() : Theme.LIGHT,
+                    opts.sizeOrDefault(), Analysis::run);
+            Snapshot.writePng(img, opts.snapshot());
+            return 0;
+        }
+        CountDownLatch closed = new CountDownLatch(1);
+        onEdt(() -> {
+            Theme theme = opts.theme() != null ? opts.theme() : settings.theme();
+            theme.install();
+            WorkbenchWindow w = new WorkbenchWindow(settings, Analysis::run, WorkbenchWindow.Mode.INTERACTIVE);
+            w.frame().addWindowListener(new java.awt.event.WindowAdapter() {
+                @Override
+                public void windowClosed(java.awt.event.WindowEvent e) {
+                    closed.countDown();
+                }
+            });
+            w.show(opts.sizeOrDefault());
+            w.workspace().open(design, file == null ? null : file.toAbsolutePath().normalize());
+            if (file != null) {
+                settings.addRecent(file);
+            }
+            offerRecovery(w, new RecoveryFolder(settings.recoveryFolder()));
         });
+        try {
+            closed.await();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+        return 0;
+    }
+
+    /**
+     * Lays a window out on {@code design} in {@code theme} at {@code size}, waits until its
+     * analysis is shown, paints it into an image and closes it. Needs a display (e.g. Xvfb).
+     */
+    public static BufferedImage snapshot(Design design, Path file, Theme theme, Dimension size,
+                                         Function<Design, AnalysisResult> analysis) throws IOException {
+        CountDownLatch shown = new CountDownLatch(1);
+        WorkbenchWindow[] window = new WorkbenchWindow[1];
+        onEdt(() -> {
+            theme.install();
+            WorkbenchWindow w = new WorkbenchWindow(new UserSettings(UserSettings.defaultFolder()), analysis,
+                    WorkbenchWindow.Mode.SNAPSHOT);
+            window[0] = w;
+            w.workspace().addListener(new Workspace.Listener() {
+                @Override
+                public void resultShown(OpenDesign d) {
+                    shown.countDown();
+                }
+            });
+            w.show(size);
+            w.workspace().open(design, file == null ? null : file.toAbsolutePath().normalize());
+        });
+        try {
+            if (!shown.await(60, TimeUnit.SECONDS)) {
+                throw new IOException("the analysis did not finish within 60 s; no snapshot written");
+            }
+            BufferedImage[] img = new BufferedImage[1];
+            onEdt(() -> { }); // let the panes take the result
+            onEdt(() -> {
+                window[0].frame().validate();
+                img[0] = Snapshot.capture(window[0].frame());
+            });
+            return img[0];
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IOException("interrupted while waiting for the analysis", e);
+        } finally {
+            onEdt(() -> {
+                if (window[0] != null) {
+                    window[0].dispose();
+                }
+            });
+        }
+    }
+
+    private static void offerRecovery(WorkbenchWindow w, RecoveryFolder recovery) {
+        List<Path> left = recovery.leftovers();
+        if (left.isEmpty()) {
+            return;
+        }
+        Object[] options = {"Recover", "Discard", "Ask next time"};
+        int a = JOptionPane.showOptionDialog(w.frame(), left.size() + " design(s) with unsaved edits were left by an earlier "
+                        + "session that did not close cleanly. Recover them?", "Recover unsaved designs",
+                JOptionPane.YES_NO_CANCEL_OPTION, JOptionPane.QUESTION_MESSAGE, null, options, options[0]);
+        if (a == 0) {
+            for (Path p : left) {
+                try {
+                    w.workspace().openRecovered(org.tankwright.design.DesignFiles.load(p));
+                    deleteQuietly(p);
+                } catch (IOException | org.tankwright.design.DesignException e) {
+                    JOptionPane.showMessageDialog(w.frame(), p + " cannot be recovered: " + e.getMessage(),
+                            "Recover unsaved designs", JOptionPane.ERROR_MESSAGE);
+                }
+            }
+        } else if (a == 1) {
+            left.forEach(Workbench::deleteQuietly);
+        }
+    }
+
+    private static void deleteQuietly(Path p) {
+        try {
+            java.nio.file.Files.deleteIfExists(p);
+        } catch (IOException e) {
+            System.err.println("tankwright: could not remove " + p + ": " + e.getMessage());
+        }
+    }
+
+    private static void onEdt(Runnable r) {
+        if (SwingUtilities.isEventDispatchThread()) {
+            r.run();
+            return;
+        }
+        try {
+            SwingUtilities.invokeAndWait(r);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        } catch (InvocationTargetException e) {
+            Throwable c = e.getCause();
+            if (c instanceof RuntimeException re) {
+                throw re;
+            }
+            if (c instanceof Error er) {
+                throw er;
+            }
+            throw new IllegalStateException(c);
+        }
     }
 }

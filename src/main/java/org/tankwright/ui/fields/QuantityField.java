@@ -4,13 +4,12 @@ import com.formdev.flatlaf.FlatClientProperties;
 import java.awt.Color;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.function.DoubleConsumer;
+import java.util.Objects;
+import java.util.function.Consumer;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JTextField;
 import javax.swing.UIManager;
-import javax.swing.event.DocumentEvent;
-import javax.swing.event.DocumentListener;
 import net.miginfocom.swing.MigLayout;
 import org.tankwright.units.Dimension;
 import org.tankwright.units.Quantities;
@@ -18,88 +17,63 @@ import org.tankwright.units.Quantities;
 /**
  * A text field for one quantity: accepts anything the units parser accepts ({@code 4n7},
  * {@code 4.7 nF}, {@code 100k}), shows the parsed value with its unit beside it, and turns red
- * with the parser's message when the text is not valid or out of range. The value it reports
- * is always the last valid one: an invalid text never reaches the document.
+ * with a message naming the field, the value and what is allowed when the text is not valid.
+ * The value it reports is always the last valid one: invalid text never reaches the document.
+ * An optional field may be left empty (the value is then absent: null).
  */
 public final class QuantityField extends JPanel {
 
     private static final int SIG = 3;
 
-    private final String label;
-    private final Dimension dimension;
-    private final double min;
-    private final double max;
+    private final QuantitySpec spec;
     private final JTextField text = new JTextField(9);
     private final JLabel echo = new JLabel(" ");
-    private final List<DoubleConsumer> listeners = new ArrayList<>();
+    private final List<Consumer<Double>> listeners = new ArrayList<>();
     private final String tip;
-    private double value;
+    private Double value;
     private String problem;
     private boolean quiet;
 
-    /**
-     * @param label     the field's name in messages ("C1 capacitance")
-     * @param dimension what the field holds
-     * @param min       smallest allowed value (inclusive)
-     * @param max       largest allowed value (inclusive)
-     * @param meaning   one sentence for the tooltip
-     */
-    public QuantityField(String label, Dimension dimension, double min, double max, String meaning) {
-        super(new MigLayout("insets 0, gap 6", "[grow,fill][120!]", ""));
-        this.label = label;
-        this.dimension = dimension;
-        this.min = min;
-        this.max = max;
+    public QuantityField(QuantitySpec spec) {
+        super(new MigLayout("insets 0, gap 6", "[grow,fill][130!]", ""));
+        this.spec = spec;
         setOpaque(false);
-        text.setName(label);
-        echo.setName(label + ".echo");
-        String range = "allowed: " + Quantities.format(min, dimension, SIG) + " … " + Quantities.format(max, dimension, SIG);
-        tip = "<html><b>" + escape(label) + "</b><br>" + escape(meaning) + "<br>" + escape(range)
-                + "<br>e.g. " + escape(dimension.example()) + "</html>";
+        text.setName(spec.label());
+        echo.setName(spec.label() + ".echo");
+        tip = "<html><b>" + escape(spec.label()) + "</b><br>" + escape(spec.meaning()) + "<br>allowed: " + escape(spec.range())
+                + (spec.optional() ? "; may be left empty" : "") + "<br>e.g. " + escape(spec.dimension().example()) + "</html>";
         text.setToolTipText(tip);
         echo.setToolTipText(tip);
+        if (spec.optional()) {
+            text.putClientProperty(FlatClientProperties.PLACEHOLDER_TEXT, "auto");
+        }
         add(text);
         add(echo);
-        text.getDocument().addDocumentListener(new DocumentListener() {
-            @Override
-            public void insertUpdate(DocumentEvent e) {
-                edited();
-            }
-
-            @Override
-            public void removeUpdate(DocumentEvent e) {
-                edited();
-            }
-
-            @Override
-            public void changedUpdate(DocumentEvent e) {
-                edited();
-            }
-        });
+        text.getDocument().addDocumentListener(new OnTextChange(this::edited));
     }
 
-    /** Called with each new valid value the user types. */
-    public void addValueListener(DoubleConsumer listener) {
+    /** Called with each new valid value the user types (null: left empty). */
+    public void addValueListener(Consumer<Double> listener) {
         listeners.add(listener);
     }
 
     /** Shows {@code si} (from the document) without notifying listeners; clears any error. */
-    public void setValue(double si) {
-        value = si;
-        if (problem == null && isCurrentText(si)) {
+    public void setValue(Double si) {
+        if (problem == null && Objects.equals(si, value) && Objects.equals(parsedText(), si)) {
             return; // the user's own spelling already says this; keep it
         }
+        value = si;
         quiet = true;
         try {
-            text.setText(Quantities.format(si, dimension, 4));
+            text.setText(si == null ? "" : formatted(si));
         } finally {
             quiet = false;
         }
         showValid();
     }
 
-    /** The last valid value (SI). */
-    public double value() {
+    /** The last valid value (SI), or null when absent. */
+    public Double value() {
         return value;
     }
 
@@ -112,15 +86,35 @@ public final class QuantityField extends JPanel {
         return text;
     }
 
-    public Dimension dimension() {
-        return dimension;
+    public QuantitySpec spec() {
+        return spec;
     }
 
-    private boolean isCurrentText(double si) {
+    /** Marks the field invalid with {@code message} (a rule across fields refused the value); the document is unchanged. */
+    public void showProblem(String message) {
+        showInvalid(spec.label() + ": " + message);
+    }
+
+    /** The invalid state's outline marker (for tests): {@code "error"} or null. */
+    public Object outline() {
+        return text.getClientProperty(FlatClientProperties.OUTLINE);
+    }
+
+    private String formatted(double si) {
+        return spec.integer() || spec.dimension() == Dimension.DIMENSIONLESS
+                ? Quantities.number(si, 6).replaceFirst("\\.?0+$", "")
+                : Quantities.format(si, spec.dimension(), 4);
+    }
+
+    private Double parsedText() {
+        String t = text.getText();
+        if (t.isBlank()) {
+            return null;
+        }
         try {
-            return Quantities.parse(text.getText(), dimension) == si;
+            return Quantities.parse(t, spec.dimension());
         } catch (IllegalArgumentException e) {
-            return false;
+            return Double.NaN;
         }
     }
 
@@ -128,22 +122,31 @@ public final class QuantityField extends JPanel {
         if (quiet) {
             return;
         }
-        double parsed;
-        try {
-            parsed = Quantities.parse(text.getText(), dimension);
-        } catch (IllegalArgumentException e) {
-            showInvalid(label + ": " + e.getMessage());
-            return;
+        Double parsed;
+        if (text.getText().isBlank()) {
+            if (!spec.optional()) {
+                showInvalid(spec.label() + ": is required; allowed " + spec.range());
+                return;
+            }
+            parsed = null;
+        } else {
+            try {
+                parsed = Quantities.parse(text.getText(), spec.dimension());
+            } catch (IllegalArgumentException e) {
+                showInvalid(spec.label() + ": " + e.getMessage());
+                return;
+            }
+            String wrong = spec.check(parsed);
+            if (wrong != null) {
+                showInvalid(spec.label() + ": " + formatted(parsed) + " " + wrong);
+                return;
+            }
         }
-        if (parsed < min || parsed > max) {
-            showInvalid(label + ": " + Quantities.format(parsed, dimension, SIG) + " is out of range; allowed "
-                    + Quantities.format(min, dimension, SIG) + " … " + Quantities.format(max, dimension, SIG));
-            return;
-        }
+        boolean changed = !Objects.equals(parsed, value);
+        value = parsed;
         showValid();
-        if (parsed != value) {
-            value = parsed;
-            for (DoubleConsumer l : List.copyOf(listeners)) {
+        if (changed) {
+            for (Consumer<Double> l : List.copyOf(listeners)) {
                 l.accept(parsed);
             }
         }
@@ -154,7 +157,7 @@ public final class QuantityField extends JPanel {
         text.putClientProperty(FlatClientProperties.OUTLINE, null);
         text.setToolTipText(tip);
         echo.setForeground(UIManager.getColor("Label.disabledForeground"));
-        echo.setText("= " + Quantities.format(value, dimension, SIG));
+        echo.setText(value == null ? "auto" : "= " + (spec.integer() ? formatted(value) : Quantities.format(value, spec.dimension(), SIG)));
     }
 
     private void showInvalid(String message) {
@@ -162,16 +165,11 @@ public final class QuantityField extends JPanel {
         text.putClientProperty(FlatClientProperties.OUTLINE, FlatClientProperties.OUTLINE_ERROR);
         Color err = UIManager.getColor("Component.error.focusedBorderColor");
         echo.setForeground(err != null ? err : Color.RED);
-        echo.setText("invalid; keeps " + Quantities.format(value, dimension, SIG));
+        echo.setText("invalid: keeps " + (value == null ? "auto" : formatted(value)));
         text.setToolTipText("<html><b>" + escape(message) + "</b><br>" + tip.substring("<html>".length()));
     }
 
-    /** The invalid state's outline marker (for tests): {@code "error"} or null. */
-    public Object outline() {
-        return text.getClientProperty(FlatClientProperties.OUTLINE);
-    }
-
     static String escape(String s) {
-        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
+        return s == null ? "" : s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
     }
 }

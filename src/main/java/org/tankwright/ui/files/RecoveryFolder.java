@@ -37,6 +37,7 @@ public final class RecoveryFolder {
     public void discard(String key) {
         try {
             Files.deleteIfExists(fileFor(key));
+            Files.deleteIfExists(fileFor(key).resolveSibling(fileFor(key).getFileName() + ".bak"));
         } catch (IOException e) {
             System.err.println("tankwright: could not remove recovery copy " + fileFor(key) + ": " + e.getMessage());
         }

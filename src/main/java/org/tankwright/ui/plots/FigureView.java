@@ -83,6 +83,9 @@ public final class FigureView extends JPanel {
 
     /** Shows {@code f}: its chart, or its reason for having none. */
     public void show(Figure f) {
+        if (!f.present() && figure != null && !figure.present() && figure.notShown().equals(f.notShown())) {
+            return; // the same sentence: nothing to redraw
+        }
         figure = f;
         if (f.present()) {
             chartPanel.setChart(f.chart());

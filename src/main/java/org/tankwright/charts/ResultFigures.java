@@ -1,0 +1,118 @@
+package org.tankwright.charts;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.Predicate;
+import org.jfree.chart.JFreeChart;
+import org.tankwright.analysis.AnalysisResult;
+import org.tankwright.analysis.EnvelopeReport;
+import org.tankwright.analysis.Series;
+import org.tankwright.units.Dimension;
+
+/**
+ * The figures of one result, in the order the window's plot tabs and the sheet show them, each
+ * drawn from the series the result holds (chosen by their quantities, not their names). A
+ * figure whose series the result does not hold says so instead of showing an empty plot.
+ */
+public final class ResultFigures {
+
+    /** Titles, in order. */
+    public static final List<String> TITLES = List.of(
+            "Input impedance", "Power and efficiency", "Capacitor voltage", "Coupling", "Operating envelope", "Tolerance");
+
+    private static final String NOT_COMPUTED = "Not computed for this design: ";
+
+    private ResultFigures() {
+    }
+
+    /** Every figure of {@code r}, styled with {@code style}. */
+    public static List<Figure> all(AnalysisResult r, ChartStyle style) {
+        List<Series> frequency = frequencySweeps(r);
+        double op = r.network() != null ? r.network().frequency() : r.design().frequency();
+        List<Figure> out = new ArrayList<>();
+        out.add(twoAxes(TITLES.get(0), frequency, s -> s.yDim() == Dimension.RESISTANCE, s -> s.yDim() == Dimension.ANGLE, op, style,
+                "the result holds no impedance sweep against frequency."));
+        out.add(twoAxes(TITLES.get(1), frequency, s -> s.yDim() == Dimension.POWER, s -> s.yDim() == Dimension.FRACTION, op, style,
+                "the result holds no power or efficiency sweep against frequency."));
+        out.add(lines(TITLES.get(2), frequency, s -> s.yDim() == Dimension.VOLTAGE, op, style,
+                "the result holds no capacitor-voltage sweep against frequency."));
+        out.add(coupling(r, style));
+        out.add(envelope(r, style));
+        out.add(Figure.missing(TITLES.get(5), NOT_COMPUTED + "the analysis result does not carry tolerance-study samples yet."));
+        return out;
+    }
+
+    private static List<Series> frequencySweeps(AnalysisResult r) {
+        if (r.network() == null || r.network().sweeps() == null) {
+            return List.of();
+        }
+        return r.network().sweeps().stream().filter(s -> s.xDim() == Dimension.FREQUENCY && s.size() > 1).toList();
+    }
+
+    private static Figure twoAxes(String title, List<Series> all, Predicate<Series> left, Predicate<Series> right, double op,
+                                  ChartStyle style, String why) {
+        List<Series> l = all.stream().filter(left).toList();
+        List<Series> rr = all.stream().filter(right).toList();
+        if (l.isEmpty() && rr.isEmpty()) {
+            return Figure.missing(title, NOT_COMPUTED + why);
+        }
+        if (l.isEmpty() || rr.isEmpty()) {
+            return lines(title, all, left.or(right), op, style, why);
+        }
+        Series x = l.get(0);
+        JFreeChart chart = XYFigures.twoAxes(title, x.xLabel(), x.xDim(), true, l.get(0).yLabel(), l.get(0).yDim(), curves(l),
+                rr.get(0).yLabel(), rr.get(0).yDim(), curves(rr), op, "operating", style);
+        return Figure.of(title, chart);
+    }
+
+    private static Figure lines(String title, List<Series> all, Predicate<Series> which, double op, ChartStyle style, String why) {
+        List<Series> s = all.stream().filter(which).toList();
+        if (s.isEmpty()) {
+            return Figure.missing(title, NOT_COMPUTED + why);
+        }
+        Series first = s.get(0);
+        return Figure.of(title, XYFigures.lines(title, first.xLabel(), first.xDim(), first.xDim() == Dimension.FREQUENCY,
+                first.yLabel(), first.yDim(), curves(s), op, "operating", style));
+    }
+
+    private static Figure coupling(AnalysisResult r, ChartStyle style) {
+        String title = TITLES.get(3);
+        if (!r.design().isLink()) {
+            return Figure.missing(title, "Not applicable: a single tank or heater has no second coil to couple to.");
+        }
+        if (r.coupling() == null || r.coupling().sweeps() == null) {
+            return Figure.missing(title, NOT_COMPUTED + "the result holds no coupling sweep over distance and offset.");
+        }
+        List<Series> k = r.coupling().sweeps().stream()
+                .filter(s -> s.xDim() == Dimension.LENGTH && s.yDim() == Dimension.DIMENSIONLESS && s.size() > 1).toList();
+        if (k.isEmpty()) {
+            return Figure.missing(title, NOT_COMPUTED + "the result holds no k sweep over distance and offset.");
+        }
+        double marker = k.get(0).markerX();
+        return Figure.of(title, XYFigures.lines(title, "distance or offset", Dimension.LENGTH, false, "k", Dimension.DIMENSIONLESS,
+                curves(k), marker, "nominal", style));
+    }
+
+    private static Figure envelope(AnalysisResult r, ChartStyle style) {
+        String title = TITLES.get(4);
+        EnvelopeReport e = r.envelope();
+        if (e == null || e.map() == null || e.map().values() == null || e.map().distances().length < 2
+                || e.map().offsets().length < 2) {
+            return Figure.missing(title, NOT_COMPUTED + "the result holds no map over distance × offset"
+                    + (r.design().envelope() == null ? " (the design sets no envelope)." : "."));
+        }
+        EnvelopeReport.EnvelopeMap m = e.map();
+        double[][] byOffset = new double[m.offsets().length][m.distances().length];
+        for (int i = 0; i < m.distances().length; i++) {
+            for (int j = 0; j < m.offsets().length; j++) {
+                byOffset[j][i] = m.values()[i][j];
+            }
+        }
+        return Figure.of(title, MapFigures.map(title + ": " + m.quantity(), "offset", Dimension.LENGTH, m.offsets(), "distance",
+                Dimension.LENGTH, m.distances(), m.quantity(), Dimension.DIMENSIONLESS, byOffset, style));
+    }
+
+    private static List<Curve> curves(List<Series> series) {
+        return series.stream().map(s -> new Curve(s.title(), s.x(), s.y())).toList();
+    }
+}
