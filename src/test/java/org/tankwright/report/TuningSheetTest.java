@@ -66,8 +66,8 @@ class TuningSheetTest {
         String[] order = {"Tuning sheet: Fixture SS pad", "SAFETY", "DANGER TW-HV-01", "WARNING TW-EX-02",
             "Follow your local electrical codes", "Tuned network", "Coil L1", "Coil L2", "Capacitor banks: build list",
             "Element stresses", "Expected bench readings", "Step 1: low voltage into a dummy load", "Step 2: full power",
-            "Trip levels", "Bench procedure", "Re-tune table", "Plots", "Input impedance and phase against frequency",
-            "Capacitor voltage against frequency", "Coupling k against lateral offset", "Field near the coils",
+            "Trip levels", "Bench procedure", "Re-tune table", "Plots", "Input impedance",
+            "Capacitor voltage", "Coupling", "Field near the coils",
             "Findings of the checks", "Local codes and licensed practice"};
         int at = -1;
         for (String s : order) {
