@@ -7,6 +7,8 @@ import java.awt.Font;
 import java.awt.FontMetrics;
 import java.awt.Graphics2D;
 import java.awt.geom.Line2D;
+import java.util.ArrayList;
+import java.util.List;
 
 /**
  * A capacitor bank's arrangement as a small schematic: strings of parts in series between two
@@ -65,7 +67,7 @@ final class BankDrawing {
                 g.drawString(dots, x - fm.stringWidth(dots) / 2f, (top + bottom) / 2);
                 continue;
             }
-            stringOfParts(g, x, top, bottom, trim ? 1 : bank.seriesCount(), fm);
+            stringOfParts(g, x, top, bottom, trim ? 1 : bank.seriesCount());
             Symbols.dot(g, x, top, 1.6);
             Symbols.dot(g, x, bottom, 1.6);
             if (trim) {
@@ -73,22 +75,43 @@ final class BankDrawing {
             }
         }
         float tx = xEnd + 22;
-        String[] lines = {
-            bank.seriesCount() + " in series \u00D7 " + bank.parallelCount() + " strings in parallel"
-                    + (hasTrim() ? ", plus the trim part" : ""),
-            bank.partCount() + " parts: " + bank.part(),
-            hasTrim() ? "trim: " + bank.trim() : "",
-        };
+        List<String> lines = new ArrayList<>();
+        lines.add(bank.seriesCount() + " in series \u00D7 " + bank.parallelCount() + " strings in parallel"
+                + (hasTrim() ? ", plus the trim part" : ""));
+        lines.add(bank.partCount() + " parts: " + bank.part());
+        if (hasTrim()) {
+            lines.add("trim: " + bank.trim());
+        }
         float ty = top + 10;
         for (String s : lines) {
-            if (!s.isEmpty()) {
-                g.drawString(s, Math.min(tx, width - fm.stringWidth(s) - 2), ty);
+            for (String piece : wrap(s, fm, width - tx - 2)) {
+                if (ty < height()) {
+                    g.drawString(piece, tx, ty);
+                }
                 ty += 11;
             }
         }
     }
 
-    private void stringOfParts(Graphics2D g, float x, float top, float bottom, int n, FontMetrics fm) {
+    private static List<String> wrap(String s, FontMetrics fm, float width) {
+        List<String> out = new ArrayList<>();
+        StringBuilder line = new StringBuilder();
+        for (String word : s.split(" ")) {
+            String candidate = line.isEmpty() ? word : line + " " + word;
+            if (fm.stringWidth(candidate) > width && !line.isEmpty()) {
+                out.add(line.toString());
+                line.setLength(0);
+                line.append(word);
+            } else {
+                line.setLength(0);
+                line.append(candidate);
+            }
+        }
+        out.add(line.toString());
+        return out;
+    }
+
+    private void stringOfParts(Graphics2D g, float x, float top, float bottom, int n) {
         int shown = Math.min(n, MAX_ROWS);
         float cell = (bottom - top) / shown;
         for (int r = 0; r < shown; r++) {
@@ -97,8 +120,9 @@ final class BankDrawing {
             if (ellipsis) {
                 g.draw(new Line2D.Float(x, top + cell * r, x, cy - 6));
                 g.draw(new Line2D.Float(x, cy + 6, x, top + cell * (r + 1)));
-                String s = "\u22EE";
-                g.drawString(s, x + 3, cy + 3);
+                for (int d = -1; d <= 1; d++) {
+                    Symbols.dot(g, x, cy + 3.5 * d, 0.9);
+                }
                 continue;
             }
             g.draw(new Line2D.Float(x, top + cell * r, x, cy - Symbols.LENGTH / 2));

@@ -290,9 +290,10 @@ final class BuildSections {
         }
         flow.heading("Capacitor banks: build list");
         for (BankReport b : r.banks()) {
+            BankDrawing drawing = new BankDrawing(b);
+            flow.ensure(PageFlow.lineHeight(PageFlow.H3) + 8 + drawing.height());
             flow.subheading(b.id() + ": " + Fmt.build(b.capacitance(), Dimension.CAPACITANCE) + " from "
                     + b.partCount() + " parts");
-            BankDrawing drawing = new BankDrawing(b);
             flow.figure(flow.width(), drawing.height(), false, g -> drawing.paint(g, flow.width()));
             Table t = new Table(new String[] {"Bank", "Value", "Worst part", "Value", "Rating", "Margin"},
                     new float[] {1.5f, 1.4f, 1.6f, 1.2f, 1.2f, 0.9f}, false, true, false, true, true, true);

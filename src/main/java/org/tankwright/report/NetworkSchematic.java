@@ -107,7 +107,7 @@ final class NetworkSchematic {
         float scale = Math.min(1f, width / natural);
         Graphics2D c = (Graphics2D) g.create();
         c.translate((width - natural * scale) / 2, 0);
-        c.scale(scale, 1);
+        c.scale(scale, scale);
         float xL1 = drawSide(c, primary, slotsP, 0, railTop, railBottom, fm);
         if (!secondary.isEmpty()) {
             float xL2 = drawSide(c, secondary, slotsS, wP + gap, railTop, railBottom, fm);

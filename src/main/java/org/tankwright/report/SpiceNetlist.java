@@ -36,6 +36,10 @@ public final class SpiceNetlist {
             sb.append("* ").append(p.name()).append(": ").append(p.role()).append('\n');
         }
         for (Part p : net.parts()) {
+            if (!Double.isFinite(p.value())) {
+                throw new IllegalArgumentException(p.name() + " (" + p.role() + ") has no value in the result, "
+                        + "and a netlist needs every element's value");
+            }
             sb.append(p.name()).append(' ').append(p.a()).append(' ').append(p.b()).append(' ');
             if (p.kind() == Kind.VOLTAGE_SOURCE || p.kind() == Kind.CURRENT_SOURCE) {
                 sb.append("AC ").append(value(p.value())).append(" 0");

@@ -6,6 +6,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.EnumSource;
 import org.tankwright.design.Enums.Topology;
 
+import java.util.List;
 import java.util.Map;
 import org.tankwright.analysis.AnalysisResult;
 import org.tankwright.analysis.CouplingReport;
@@ -15,6 +16,7 @@ import org.tankwright.analysis.ResultFixtures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 class SpiceNetlistTest {
@@ -112,6 +114,18 @@ class SpiceNetlistTest {
         double pa = NetlistSolver.solve(a, a.acStart()).v(a.elements().get("RL").a()).norm();
         double pb = NetlistSolver.solve(b, b.acStart()).v(b.elements().get("RL").a()).norm();
         assertEquals(pa, pb, pa * 1e-9);
+    }
+
+    @Test
+    void anElementWithoutAValueIsRefusedByName() {
+        TunedNetwork net = new TunedNetwork(Topology.SERIES, 1e5, List.of(
+                new TunedNetwork.Part("V1", TunedNetwork.Kind.VOLTAGE_SOURCE, 1, 0, 1.0, "source"),
+                new TunedNetwork.Part("C1", TunedNetwork.Kind.CAPACITOR, 1, 2, 1e-9, "primary capacitor bank"),
+                new TunedNetwork.Part("L1", TunedNetwork.Kind.INDUCTOR, 2, 3, 1e-3, "primary coil"),
+                new TunedNetwork.Part("R1", TunedNetwork.Kind.RESISTOR, 3, 0, Double.NaN, "coil AC resistance")),
+                Double.NaN, Double.NaN, false, false);
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> SpiceNetlist.write(net, "t"));
+        assertTrue(e.getMessage().startsWith("R1 (coil AC resistance)"), e.getMessage());
     }
 
     @Test

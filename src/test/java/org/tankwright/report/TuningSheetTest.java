@@ -180,42 +180,61 @@ class TuningSheetTest {
     @EnumSource(Paper.class)
     void everyGlyphLiesInsideThePageMarginsAndNoPageIsBlank(Paper paper) throws IOException {
         for (AnalysisResult r : List.of(ReportFixtures.ssLinkFull(), ResultFixtures.heater(), ResultFixtures.measuredTank())) {
-            PDDocument doc = sheet(r, paper);
-            float w = paper.size().getWidth();
-            float h = paper.size().getHeight();
-            List<String> outside = new ArrayList<>();
-            List<Integer> perPage = new ArrayList<>();
-            PDFTextStripper s = new PDFTextStripper() {
-                int count;
+            assertLaidOut(sheet(r, paper), paper, r.design().name());
+        }
+    }
 
-                @Override
-                protected void startPage(org.apache.pdfbox.pdmodel.PDPage page) {
-                    count = 0;
-                }
+    @Test
+    void largeBanksAreDrawnShortenedWithTheirCountsWrittenOut() throws IOException {
+        ResultFixtures.Link p = new ResultFixtures.Link();
+        p.seriesCount = 7;
+        p.parallelCount = 12;
+        p.dielectric = "polypropylene film, 2000 V DC, 5 % tolerance, self-healing, for resonant circuits";
+        AnalysisResult r = p.build();
+        try (PDDocument doc = TuningSheet.build(r, Paper.LETTER, INFO)) {
+            String t = text(doc);
+            assertTrue(t.contains("7 in series \u00D7 12 strings in parallel"), "counts written beside the drawing");
+            assertTrue(t.contains("84 parts"));
+            assertLaidOut(doc, Paper.LETTER, "large banks");
+        }
+    }
 
-                @Override
-                protected void endPage(org.apache.pdfbox.pdmodel.PDPage page) {
-                    perPage.add(count);
-                }
+    /** Every glyph inside the page margins, and every page with more than its running head and foot. */
+    static void assertLaidOut(PDDocument doc, Paper paper, String what) throws IOException {
+        float w = paper.size().getWidth();
+        float h = paper.size().getHeight();
+        List<String> outside = new ArrayList<>();
+        List<Integer> perPage = new ArrayList<>();
+        PDFTextStripper s = new PDFTextStripper() {
+            int count;
 
-                @Override
-                protected void writeString(String text, List<TextPosition> glyphs) {
-                    for (TextPosition g : glyphs) {
-                        count++;
-                        if (g.getXDirAdj() < 30 || g.getXDirAdj() + g.getWidthDirAdj() > w - 30
-                                || g.getYDirAdj() < 30 || g.getYDirAdj() > h - 20) {
-                            outside.add(g.getUnicode() + "@" + g.getXDirAdj() + "," + g.getYDirAdj());
-                        }
+            @Override
+            protected void startPage(org.apache.pdfbox.pdmodel.PDPage page) {
+                count = 0;
+            }
+
+            @Override
+            protected void endPage(org.apache.pdfbox.pdmodel.PDPage page) {
+                perPage.add(count);
+            }
+
+            @Override
+            protected void writeString(String text, List<TextPosition> glyphs) {
+                for (TextPosition g : glyphs) {
+                    count++;
+                    if (g.getXDirAdj() < 30 || g.getXDirAdj() + g.getWidthDirAdj() > w - 30
+                            || g.getYDirAdj() < 30 || g.getYDirAdj() > h - 20) {
+                        outside.add(g.getUnicode() + "@" + g.getXDirAdj() + "," + g.getYDirAdj());
                     }
                 }
-            };
-            s.getText(doc);
-            assertEquals(List.of(), outside, "glyphs outside the margins of " + r.design().name());
-            assertEquals(doc.getNumberOfPages(), perPage.size());
-            for (int i = 0; i < perPage.size(); i++) {
-                // a page with only its running head and foot holds well under 120 glyphs
-                assertTrue(perPage.get(i) > 120, "page " + (i + 1) + " of " + r.design().name() + " has content");
             }
+        };
+        s.getText(doc);
+        assertEquals(List.of(), outside, "glyphs outside the margins of " + what);
+        assertEquals(doc.getNumberOfPages(), perPage.size());
+        for (int i = 0; i < perPage.size(); i++) {
+            // a page with only its running head and foot holds well under 120 glyphs
+            assertTrue(perPage.get(i) > 120, "page " + (i + 1) + " of " + what + " has content");
         }
     }
 
