@@ -6,6 +6,8 @@ import org.tankwright.analysis.Analysis;
 import org.tankwright.analysis.AnalysisResult;
 import org.tankwright.analysis.Presets;
 
+import java.util.List;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -24,6 +26,8 @@ class PresetSheetsTest {
                     assertTrue(t.contains("SAFETY"), name + " has its safety box");
                     assertTrue(t.contains("Follow your local electrical codes"), name + " defers to local codes");
                     assertEquals(paper.size().getHeight(), doc.getPage(0).getMediaBox().getHeight(), 0.01);
+                    TuningSheetTest.assertLaidOut(doc, paper, name);
+                    assertEquals(List.of(), TuningSheetTest.overlaps(doc), name);
                 }
             }
             checked++;

@@ -196,7 +196,73 @@ class TuningSheetTest {
             assertTrue(t.contains("7 in series \u00D7 12 strings in parallel"), "counts written beside the drawing");
             assertTrue(t.contains("84 parts"));
             assertLaidOut(doc, Paper.LETTER, "large banks");
+            assertEquals(List.of(), overlaps(doc), "large banks");
         }
+    }
+
+    @ParameterizedTest
+    @EnumSource(Paper.class)
+    void noTwoGlyphsOverlap(Paper paper) throws IOException {
+        for (AnalysisResult r : List.of(ReportFixtures.ssLinkFull(), ResultFixtures.heater(), ResultFixtures.measuredTank())) {
+            assertEquals(List.of(), overlaps(sheet(r, paper)), r.design().name());
+        }
+    }
+
+    @Test
+    void theOverlapCheckSeesTwoWordsPrintedOnTopOfEachOther() throws IOException {
+        try (PDDocument doc = new PDDocument()) {
+            org.apache.pdfbox.pdmodel.PDPage page = new org.apache.pdfbox.pdmodel.PDPage();
+            doc.addPage(page);
+            var font = new org.apache.pdfbox.pdmodel.font.PDType1Font(org.apache.pdfbox.pdmodel.font.Standard14Fonts.FontName.HELVETICA);
+            try (var cs = new org.apache.pdfbox.pdmodel.PDPageContentStream(doc, page)) {
+                for (String word : new String[] {"first", "other"}) {
+                    cs.beginText();
+                    cs.setFont(font, 10);
+                    cs.newLineAtOffset(100, 500);
+                    cs.showText(word);
+                    cs.endText();
+                }
+            }
+            assertFalse(overlaps(doc).isEmpty());
+        }
+    }
+
+    /** Places where two glyphs cover a good part of each other (neighbouring letters only touch). */
+    static List<String> overlaps(PDDocument doc) throws IOException {
+        List<List<float[]>> pages = new ArrayList<>();
+        PDFTextStripper s = new PDFTextStripper() {
+            @Override
+            protected void startPage(org.apache.pdfbox.pdmodel.PDPage page) {
+                pages.add(new ArrayList<>());
+            }
+
+            @Override
+            protected void writeString(String text, List<TextPosition> glyphs) {
+                for (TextPosition g : glyphs) {
+                    if (!g.getUnicode().isBlank()) {
+                        pages.get(pages.size() - 1).add(new float[] {g.getXDirAdj(), g.getYDirAdj() - g.getHeightDir(),
+                            g.getWidthDirAdj(), g.getHeightDir()});
+                    }
+                }
+            }
+        };
+        s.getText(doc);
+        List<String> found = new ArrayList<>();
+        for (int p = 0; p < pages.size(); p++) {
+            List<float[]> boxes = pages.get(p);
+            for (int i = 0; i < boxes.size(); i++) {
+                for (int j = i + 1; j < boxes.size(); j++) {
+                    float[] a = boxes.get(i);
+                    float[] b = boxes.get(j);
+                    float ox = Math.min(a[0] + a[2], b[0] + b[2]) - Math.max(a[0], b[0]);
+                    float oy = Math.min(a[1] + a[3], b[1] + b[3]) - Math.max(a[1], b[1]);
+                    if (ox > 0.4f * Math.min(a[2], b[2]) && oy > 0.4f * Math.min(a[3], b[3])) {
+                        found.add("page " + (p + 1) + " at " + a[0] + "," + a[1]);
+                    }
+                }
+            }
+        }
+        return found;
     }
 
     /** Every glyph inside the page margins, and every page with more than its running head and foot. */
