@@ -19,6 +19,8 @@ import picocli.CommandLine.Command;
                 CoupleCommand.class,
                 FieldCommand.class,
                 CoilCommand.class,
+                SheetCommand.class,
+                ExportCommand.class,
                 CheckCommand.class,
         })
 public final class Main implements Runnable {
