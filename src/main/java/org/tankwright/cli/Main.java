@@ -22,6 +22,8 @@ import picocli.CommandLine.Command;
                 SheetCommand.class,
                 ExportCommand.class,
                 CheckCommand.class,
+                SolveCommand.class,
+                ToleranceCommand.class,
         })
 public final class Main implements Runnable {
 
