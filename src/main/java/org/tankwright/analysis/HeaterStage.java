@@ -87,9 +87,9 @@ final class HeaterStage {
         TuningResult hot = null;
         for (int i = 0; i < ITERATIONS; i++) {
             hotLoad = WorkpieceLoad.inCoil(wc, bar, hotMedium, fh, ih);
-            fh = 1 / (2 * Math.PI * Math.sqrt(hotLoad.loadedInductance() * c));
-            hot = NetworkStage.tune(NetworkStage.linkDesign(d, fh,
-                    LinkValues.tank(hotLoad.loadedInductance(), hotLoad.totalResistance()), c, 0));
+            LinkValues hv = LinkValues.tank(hotLoad.loadedInductance(), hotLoad.totalResistance());
+            fh = samePhaseFrequency(d, hv, c, cold.design().targetPhase(), fh);
+            hot = NetworkStage.tune(NetworkStage.linkDesign(d, fh, hv, c, 0));
             double next = coilCurrent(hot);
             boolean done = Math.abs(next - ih) <= CURRENT_TOLERANCE * next;
             ih = next;
@@ -103,7 +103,7 @@ final class HeaterStage {
         double mass = bar.mass(material.density());
         List<String> notes = new ArrayList<>();
         notes.add("cold point: capacitor " + (fixedC == null ? "tuned" : "fixed") + " at the design frequency; "
-                + "hot point: same capacitor, the driver follows the tank's resonance (common practice for heater drivers)");
+                + "hot point: same capacitor, the driver follows the tank to the same input phase (common practice for heater drivers)");
         notes.addAll(coldLoad.provenance().notes());
         double heatingTime = Double.NaN;
         try {
@@ -127,6 +127,37 @@ final class HeaterStage {
                 Math.max(f, hotPoint.resonantFrequency()), advice.lowFrequency(), advice.highFrequency(), mass,
                 heatingTime, coolant.volumeFlow(), List.copyOf(notes));
         return new Heated(cold, hot, report);
+    }
+
+    /**
+     * The frequency at which the tank, with its capacitor fixed, shows the same input phase as at the
+     * cold point: the driver follows the tank (common practice), found by bisection around its resonance.
+     */
+    static double samePhaseFrequency(Design d, LinkValues v, double c, double targetDeg, double guess) {
+        double f0 = 1 / (2 * Math.PI * Math.sqrt(v.l1() * c));
+        org.tankwright.circuit.PhasorSolver s = NetworkStage.tune(NetworkStage.linkDesign(d, f0, v, c, 0)).newSolver();
+        int src = s.network().sourceIndex();
+        double lo = f0 / 3;
+        double hi = f0 * 3;
+        s.solve(lo);
+        double pLo = s.inputPhaseDeg(src) - targetDeg;
+        s.solve(hi);
+        double pHi = s.inputPhaseDeg(src) - targetDeg;
+        if (Math.signum(pLo) == Math.signum(pHi)) {
+            return Math.abs(targetDeg) < 1e-9 ? f0 : guess;
+        }
+        for (int i = 0; i < 60 && hi - lo > 1e-9 * f0; i++) {
+            double mid = Math.sqrt(lo * hi);
+            s.solve(mid);
+            double pm = s.inputPhaseDeg(src) - targetDeg;
+            if (Math.signum(pm) == Math.signum(pLo)) {
+                lo = mid;
+                pLo = pm;
+            } else {
+                hi = mid;
+            }
+        }
+        return Math.sqrt(lo * hi);
     }
 
     private static double coilCurrent(TuningResult t) {
