@@ -93,6 +93,23 @@ public final class Analysis {
                 r.banks(), r.heater(), r.exposure(), r.findings(), r.notes(), System.nanoTime() - t0);
     }
 
+    /** Quality factor of the tank a capacitor sits in: its reactive power over the tank's losses. */
+    private static double tankQ(OperatingPoint op, String capacitor) {
+        String coil = capacitor.equals("C2") ? Topologies.L2 : Topologies.L1;
+        if (!op.has(coil)) {
+            return Double.NaN;
+        }
+        var c = op.stress(capacitor);
+        double reactive = c.vRms() * c.iRms();
+        double loss = op.stress(coil).loss() + c.loss();
+        if (op.has(Topologies.LOAD) && capacitor.equals("C2")) {
+            loss += op.stress(Topologies.LOAD).loss();
+        } else if (op.has(Topologies.LOAD) && op.topology().isLink()) {
+            loss += op.stress(Topologies.LOAD).loss() + op.stress(Topologies.L2).loss();
+        }
+        return loss > 0 ? reactive / loss : Double.NaN;
+    }
+
     private static double fixed(Double c) {
         return c == null ? 0 : c;
     }
@@ -138,7 +155,8 @@ public final class Analysis {
                 }
             }
         }
-        BankStage.Chosen c = BankStage.choose(id, target, vRms, iRms, s.vRms(), s.iRms(), s.dcBias(), op.frequency(), d);
+        BankStage.Chosen c = BankStage.choose(id, target, vRms, iRms, s.vRms(), s.iRms(), s.dcBias(), op.frequency(),
+                tankQ(op, id), d);
         if (c.report() == null) {
             notes.add(c.note());
             return null;

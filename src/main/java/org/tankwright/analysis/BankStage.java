@@ -58,13 +58,29 @@ final class BankStage {
      * to the envelope's worst point themselves.
      */
     static Chosen choose(String id, double target, double vRms, double iRms, double vNominal, double iNominal,
-                         double dcBias, double f, Design d) {
+                         double dcBias, double f, double tankQ, Design d) {
         BankStress stress = BankStress.sinusoidal(vRms, iRms, dcBias, f);
-        BankRequest req = BankRequest.of(target, maxDeviation(d), stress);
+        // A tank of quality factor Q detunes by about 2Q·ΔC/(2C) in tan(phase): keep the bank within
+        // 1/(2Q) of its target so that the phase moves by less than about 27° (common practice: trim a high-Q tank).
+        double allowed = Double.isFinite(tankQ) && tankQ > 1 ? Math.max(0.002, Math.min(maxDeviation(d), 0.5 / tankQ))
+                : maxDeviation(d);
+        BankRequest req = BankRequest.of(target, allowed, stress);
         // Tank capacitors carry the full circulating current: only dielectrics suited to resonant tanks
         // (polypropylene film, C0G/NP0, mica) are considered (common practice).
         List<CapacitorPart> suited = catalogue(d).parts().stream().filter(p -> p.dielectric().suitsResonantTank()).toList();
         BankSearchResult res = BankSynthesis.search(req, suited);
+        if (!res.banks().isEmpty()) {
+            // Near its self-resonance a bank looks larger than its nominal value, C/(1 − ω²·ESL·C):
+            // search again for the nominal value whose effective value is the target.
+            double w2esl = Math.pow(2 * Math.PI * f, 2) * res.best().esl();
+            double nominal = target / (1 + w2esl * target);
+            if (Math.abs(nominal - target) > 1e-3 * target) {
+                BankSearchResult again = BankSynthesis.search(BankRequest.of(nominal, allowed, stress), suited);
+                if (!again.banks().isEmpty()) {
+                    res = again;
+                }
+            }
+        }
         if (res.banks().isEmpty()) {
             return new Chosen(null, null, id + ": no bank of the catalogue's parts reaches "
                     + Quantities.format(target, Dimension.CAPACITANCE, 4) + " within the limits (" + res.bounds()
@@ -89,8 +105,17 @@ final class BankStage {
                 finiteOrNaN(w.peakVoltageLimit()), w.currentRms() * ki, finiteOrNaN(w.currentLimit()),
                 w.dissipation() * ki * ki, w.srf(), w.dvdt() * kv, finiteOrNaN(w.dvdtLimit()), b.storedEnergy() * kv * kv,
                 List.copyOf(alternatives),
-                List.copyOf(b.warnings()));
+                allowed < maxDeviation(d) ? concat(b.warnings(), "held within " + Quantities.format(allowed, Dimension.FRACTION, 2)
+                        + " of its target (not " + Quantities.format(maxDeviation(d), Dimension.FRACTION, 2)
+                        + ") because the tank's Q of " + Quantities.number(tankQ, 3) + " detunes with every per cent")
+                        : List.copyOf(b.warnings()));
         return new Chosen(b, report, null);
+    }
+
+    private static List<String> concat(List<String> a, String b) {
+        List<String> out = new ArrayList<>(a);
+        out.add(b);
+        return List.copyOf(out);
     }
 
     /** A limit the part does not state is infinite in the capacitor model and NaN (unknown) in the report. */
