@@ -128,6 +128,42 @@ class WorkbenchWindowTest {
     }
 
     @Test
+    void theDarkThemeSwitchesTheWholeWindowAndTheCharts() throws Exception {
+        WorkbenchWindow w = WindowHarness.open(Presets.demo(), Analysis::run);
+        javax.swing.JCheckBoxMenuItem dark = WindowHarness.onEdt(() -> find(w.frame().getJMenuBar(), "Dark theme"));
+        try {
+            WindowHarness.onEdt(() -> {
+                dark.doClick();
+                return null;
+            });
+            java.awt.Color bg = WindowHarness.onEdt(() -> w.figures().getBackground());
+            assertTrue(bg.getRed() + bg.getGreen() + bg.getBlue() < 3 * 110, "panes are dark: " + bg);
+            java.awt.Color chart = WindowHarness.onEdt(() -> org.tankwright.charts.ChartStyle.fromLookAndFeel().background());
+            assertEquals(bg, chart, "charts take the dark background too");
+        } finally {
+            WindowHarness.onEdt(() -> {
+                if (dark.isSelected()) {
+                    dark.doClick();
+                }
+                return null;
+            });
+        }
+        java.awt.Color back = WindowHarness.onEdt(() -> w.figures().getBackground());
+        assertTrue(back.getRed() > 200, "back to light: " + back);
+    }
+
+    private static javax.swing.JCheckBoxMenuItem find(javax.swing.JMenuBar bar, String text) {
+        for (int i = 0; i < bar.getMenuCount(); i++) {
+            for (java.awt.Component c : bar.getMenu(i).getMenuComponents()) {
+                if (c instanceof javax.swing.JCheckBoxMenuItem item && text.equals(item.getText())) {
+                    return item;
+                }
+            }
+        }
+        throw new AssertionError("no menu item " + text);
+    }
+
+    @Test
     void anUnreadableSavedPaneArrangementFallsBackToTheDefault(@TempDir Path dir) throws Exception {
         WorkbenchWindow w = WindowHarness.open(Presets.demo(), Analysis::run);
         Path saved = dir.resolve("panes.xml");
