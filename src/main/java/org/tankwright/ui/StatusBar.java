@@ -19,7 +19,7 @@ public final class StatusBar extends JPanel {
     private long computations;
 
     public StatusBar() {
-        super(new MigLayout("insets 2 8 2 8, gap 16", "[][][grow,fill][][]", ""));
+        super(new MigLayout("insets 2 8 2 8, gap 16, hidemode 3", "", ""));
         Color line = UIManager.getColor("Component.borderColor");
         setBorder(BorderFactory.createMatteBorder(1, 0, 0, 0, line != null ? line : Color.GRAY));
         state.setName("status.state");
@@ -34,9 +34,15 @@ public final class StatusBar extends JPanel {
         stop.putClientProperty("JButton.buttonType", "borderless");
         add(busy, "w 80!, h 10!");
         add(stop);
-        add(state);
+        add(state, "growx, pushx");
         add(findings);
         add(file);
+    }
+
+    /** Its height is fixed by the window: a change of text is laid out here, not across the window. */
+    @Override
+    public boolean isValidateRoot() {
+        return true;
     }
 
     /** A computation was started. */
