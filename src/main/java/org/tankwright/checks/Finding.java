@@ -15,4 +15,30 @@ package org.tankwright.checks;
  */
 public record Finding(String id, Severity severity, double value, double limit, String unit, String source,
                       String element, String message, String action) {
+
+    /**
+     * The deferral every danger and warning ends with (and the general cautions too).
+     */
+    public static final String DEFERRAL = "Follow your local electrical codes and have the work checked by a licensed"
+            + " professional; this screening does not replace them.";
+
+    /** A finding whose action ends with {@link #DEFERRAL} when the severity is danger or warning. */
+    public static Finding of(String id, Severity severity, double value, double limit, String unit, String source,
+                             String element, String message, String action) {
+        String a = action;
+        if ((severity == Severity.DANGER || severity == Severity.WARNING) && !a.endsWith(DEFERRAL)) {
+            a = a.isEmpty() ? DEFERRAL : a + " " + DEFERRAL;
+        }
+        return new Finding(id, severity, value, limit, unit, source, element, message, a);
+    }
+
+    /** Whether the finding carries a computed value. */
+    public boolean hasValue() {
+        return Double.isFinite(value);
+    }
+
+    /** Whether the finding carries a limit. */
+    public boolean hasLimit() {
+        return Double.isFinite(limit);
+    }
 }
