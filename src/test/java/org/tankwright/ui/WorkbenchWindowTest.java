@@ -131,6 +131,38 @@ class WorkbenchWindowTest {
     }
 
     @Test
+    void theToleranceStudyRunsOffTheEventThreadAndShowsAHistogram() throws Exception {
+        WorkbenchWindow w = WindowHarness.open(Presets.demo(), Analysis::run);
+        org.tankwright.ui.plots.ToleranceTab tab = w.plots().tolerance();
+        WindowHarness.await("the study can be started", () -> {
+            javax.swing.JButton run = find(tab, "tolerance.run");
+            return run.isEnabled();
+        });
+        WindowHarness.onEdt(() -> {
+            find(tab, "tolerance.run").doClick();
+            return null;
+        });
+        WindowHarness.await("the study finished", () -> tab.study() != null);
+        org.tankwright.tolerance.StudyResult r = WindowHarness.onEdt(tab::study);
+        assertTrue(r.completed() > 0, "samples were drawn");
+    }
+
+    private static javax.swing.JButton find(java.awt.Container root, String name) {
+        for (java.awt.Component c : root.getComponents()) {
+            if (c instanceof javax.swing.JButton b && name.equals(b.getName())) {
+                return b;
+            }
+            if (c instanceof java.awt.Container inner) {
+                javax.swing.JButton b = find(inner, name);
+                if (b != null) {
+                    return b;
+                }
+            }
+        }
+        return null;
+    }
+
+    @Test
     void theDarkThemeSwitchesTheWholeWindowAndTheCharts() throws Exception {
         WorkbenchWindow w = WindowHarness.open(Presets.demo(), Analysis::run);
         javax.swing.JCheckBoxMenuItem dark = WindowHarness.onEdt(() -> find(w.frame().getJMenuBar(), "Dark theme"));
