@@ -60,8 +60,8 @@ public final class ResultFigures {
             return lines(title, all, left.or(right), op, style, why);
         }
         Series x = l.get(0);
-        JFreeChart chart = XYFigures.twoAxes(title, x.xLabel(), x.xDim(), true, l.get(0).yLabel(), l.get(0).yDim(), curves(l),
-                rr.get(0).yLabel(), rr.get(0).yDim(), curves(rr), op, "operating", style);
+        JFreeChart chart = XYFigures.twoAxes(title, x.xLabel(), x.xDim(), true, axisLabel(l), l.get(0).yDim(), curves(l),
+                axisLabel(rr), rr.get(0).yDim(), curves(rr), op, "operating", style);
         return Figure.of(title, chart);
     }
 
@@ -72,7 +72,7 @@ public final class ResultFigures {
         }
         Series first = s.get(0);
         return Figure.of(title, XYFigures.lines(title, first.xLabel(), first.xDim(), first.xDim() == Dimension.FREQUENCY,
-                first.yLabel(), first.yDim(), curves(s), op, "operating", style));
+                axisLabel(s), first.yDim(), curves(s), op, "operating", style));
     }
 
     private static Figure coupling(AnalysisResult r, ChartStyle style) {
@@ -109,7 +109,30 @@ public final class ResultFigures {
             }
         }
         return Figure.of(title, MapFigures.map(title + ": " + m.quantity(), "offset", Dimension.LENGTH, m.offsets(), "distance",
-                Dimension.LENGTH, m.distances(), m.quantity(), Dimension.DIMENSIONLESS, byOffset, style));
+                Dimension.LENGTH, m.distances(), m.quantity(), dimensionOf(m.quantity()), byOffset, style));
+    }
+
+    /** One series: its own label; several on one axis: the quantity they share. */
+    private static String axisLabel(List<Series> s) {
+        return s.size() == 1 ? s.get(0).yLabel() : s.get(0).yDim().noun();
+    }
+
+    /** The map carries its quantity only in words (see the report to the lead): read the dimension from them. */
+    private static Dimension dimensionOf(String quantity) {
+        String q = quantity.toLowerCase(java.util.Locale.ROOT);
+        if (q.contains("efficiency")) {
+            return Dimension.FRACTION;
+        }
+        if (q.contains("voltage")) {
+            return Dimension.VOLTAGE;
+        }
+        if (q.contains("power")) {
+            return Dimension.POWER;
+        }
+        if (q.contains("current")) {
+            return Dimension.CURRENT;
+        }
+        return Dimension.DIMENSIONLESS;
     }
 
     private static List<Curve> curves(List<Series> series) {

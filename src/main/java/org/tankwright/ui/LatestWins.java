@@ -30,6 +30,7 @@ public final class LatestWins<I, O> implements AutoCloseable {
     private final Runnable onStart;
     private final ExecutorService worker;
     private final AtomicLong latest = new AtomicLong();
+    private volatile Thread running;
 
     /**
      * @param computation the pure function to run (called on the worker thread)
@@ -66,10 +67,15 @@ public final class LatestWins<I, O> implements AutoCloseable {
         long t0 = System.nanoTime();
         O output = null;
         Throwable failure = null;
+        Thread.interrupted(); // start clean: an earlier cancel is not for this request
+        running = Thread.currentThread();
         try {
             output = computation.apply(input);
         } catch (RuntimeException | StackOverflowError e) {
             failure = e;
+        } finally {
+            running = null;
+            Thread.interrupted(); // a cancel aimed at this request must not reach the next one
         }
         Outcome<I, O> outcome = new Outcome<>(input, output, failure, System.nanoTime() - t0);
         SwingUtilities.invokeLater(() -> {
@@ -77,6 +83,18 @@ public final class LatestWins<I, O> implements AutoCloseable {
                 publisher.accept(outcome);
             }
         });
+    }
+
+    /**
+     * Drops the request in flight: its result will not be published, and the worker thread is
+     * interrupted so that a computation that checks for interruption can stop early.
+     */
+    public void cancel() {
+        latest.incrementAndGet();
+        Thread t = running;
+        if (t != null) {
+            t.interrupt();
+        }
     }
 
     @Override

@@ -132,6 +132,11 @@ public final class WorkbenchWindow {
                 }
             }
         });
+        status.onStop(() -> {
+            if (workspace.selected() != null) {
+                workspace.cancel(workspace.selected());
+            }
+        });
         frame.setJMenuBar(menus());
         frame.setTransferHandler(new DesignDropHandler(files::open));
         frame.addWindowListener(new WindowAdapter() {

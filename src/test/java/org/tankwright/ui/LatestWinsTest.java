@@ -66,6 +66,30 @@ class LatestWinsTest {
         }
     }
 
+    @Test
+    void cancelDropsTheResultInFlightAndInterruptsTheComputation() throws Exception {
+        CountDownLatch started = new CountDownLatch(1);
+        CountDownLatch interrupted = new CountDownLatch(1);
+        List<Integer> shown = new CopyOnWriteArrayList<>();
+        try (LatestWins<Integer, Integer> lw = new LatestWins<>(i -> {
+            started.countDown();
+            try {
+                Thread.sleep(10_000);
+            } catch (InterruptedException e) {
+                interrupted.countDown();
+            }
+            return i;
+        }, () -> { }, o -> shown.add(o.output()))) {
+            SwingUtilities.invokeAndWait(() -> lw.submit(1));
+            assertTrue(started.await(5, TimeUnit.SECONDS));
+            SwingUtilities.invokeAndWait(lw::cancel);
+            assertTrue(interrupted.await(5, TimeUnit.SECONDS), "a computation that listens for interruption stops");
+            Thread.sleep(100);
+            SwingUtilities.invokeAndWait(() -> { });
+            assertEquals(List.of(), shown, "the cancelled result is not published");
+        }
+    }
+
     private static void await(CountDownLatch l) {
         try {
             l.await(5, TimeUnit.SECONDS);

@@ -131,6 +131,74 @@ class WorkbenchWindowTest {
     }
 
     @Test
+    void theToleranceStudyRunsOffTheEventThreadAndShowsAHistogram() throws Exception {
+        WorkbenchWindow w = WindowHarness.open(Presets.demo(), Analysis::run);
+        org.tankwright.ui.plots.ToleranceTab tab = w.plots().tolerance();
+        WindowHarness.await("the study can be started", () -> {
+            javax.swing.JButton run = find(tab, "tolerance.run");
+            return run.isEnabled();
+        });
+        WindowHarness.onEdt(() -> {
+            find(tab, "tolerance.run").doClick();
+            return null;
+        });
+        WindowHarness.await("the study finished", () -> tab.study() != null);
+        org.tankwright.tolerance.StudyResult r = WindowHarness.onEdt(tab::study);
+        assertTrue(r.completed() > 0, "samples were drawn");
+    }
+
+    private static javax.swing.JButton find(java.awt.Container root, String name) {
+        for (java.awt.Component c : root.getComponents()) {
+            if (c instanceof javax.swing.JButton b && name.equals(b.getName())) {
+                return b;
+            }
+            if (c instanceof java.awt.Container inner) {
+                javax.swing.JButton b = find(inner, name);
+                if (b != null) {
+                    return b;
+                }
+            }
+        }
+        return null;
+    }
+
+    @Test
+    void theDarkThemeSwitchesTheWholeWindowAndTheCharts() throws Exception {
+        WorkbenchWindow w = WindowHarness.open(Presets.demo(), Analysis::run);
+        javax.swing.JCheckBoxMenuItem dark = WindowHarness.onEdt(() -> find(w.frame().getJMenuBar(), "Dark theme"));
+        try {
+            WindowHarness.onEdt(() -> {
+                dark.doClick();
+                return null;
+            });
+            java.awt.Color bg = WindowHarness.onEdt(() -> w.figures().getBackground());
+            assertTrue(bg.getRed() + bg.getGreen() + bg.getBlue() < 3 * 110, "panes are dark: " + bg);
+            java.awt.Color chart = WindowHarness.onEdt(() -> org.tankwright.charts.ChartStyle.fromLookAndFeel().background());
+            assertEquals(bg, chart, "charts take the dark background too");
+        } finally {
+            WindowHarness.onEdt(() -> {
+                if (dark.isSelected()) {
+                    dark.doClick();
+                }
+                return null;
+            });
+        }
+        java.awt.Color back = WindowHarness.onEdt(() -> w.figures().getBackground());
+        assertTrue(back.getRed() > 200, "back to light: " + back);
+    }
+
+    private static javax.swing.JCheckBoxMenuItem find(javax.swing.JMenuBar bar, String text) {
+        for (int i = 0; i < bar.getMenuCount(); i++) {
+            for (java.awt.Component c : bar.getMenu(i).getMenuComponents()) {
+                if (c instanceof javax.swing.JCheckBoxMenuItem item && text.equals(item.getText())) {
+                    return item;
+                }
+            }
+        }
+        throw new AssertionError("no menu item " + text);
+    }
+
+    @Test
     void anUnreadableSavedPaneArrangementFallsBackToTheDefault(@TempDir Path dir) throws Exception {
         WorkbenchWindow w = WindowHarness.open(Presets.demo(), Analysis::run);
         Path saved = dir.resolve("panes.xml");

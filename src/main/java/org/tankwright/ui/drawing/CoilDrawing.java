@@ -132,16 +132,20 @@ public final class CoilDrawing extends JComponent {
         int rings = c.winding() == CoilSketch.Winding.AXIAL ? c.layers() : n;
         for (int i = 0; i < rings; i++) {
             double r = radius(c, i, rings);
-            g.draw(outline(c, v.x(c.x()), v.y(c.y()), r * v.s()));
+            g.draw(outline(c, v.x(c.x()), v.y(c.y()), r, v.s()));
         }
     }
 
-    private static Shape outline(CoilSketch.Coil c, double cx, double cy, double r) {
+    /** One turn of radius {@code rm} (metres) seen from above, at scale {@code s} pixels per metre. */
+    private static Shape outline(CoilSketch.Coil c, double cx, double cy, double rm, double s) {
+        double r = rm * s;
         if (c.sides() == 0) {
             return new Ellipse2D.Double(cx - r, cy - r, 2 * r, 2 * r);
         }
         if (c.sides() == 4) {
-            double h = r * c.aspect();
+            double span = c.outerRadius() - c.innerRadius();
+            double t = span > 0 ? (rm - c.innerRadius()) / span : 1;
+            double h = r * (c.innerAspect() + (c.aspect() - c.innerAspect()) * t);
             return new Rectangle2D.Double(cx - r, cy - h, 2 * r, 2 * h);
         }
         Path2D.Double p = new Path2D.Double();

@@ -23,7 +23,8 @@ public record CoilSketch(List<Coil> coils, double distance, double offset, Bar w
      * @param label        its name
      * @param winding      flat or axial
      * @param sides        outline of a turn seen from above: 0 round, 4 square, 6 hexagon, 8 octagon
-     * @param aspect       height / width of a rectangular turn (1 otherwise)
+     * @param aspect       height / width of the outermost rectangular turn (1 otherwise)
+     * @param innerAspect  height / width of the innermost rectangular turn (1 otherwise)
      * @param innerRadius  radius of the innermost turn at the wire's centre (across flats for polygons)
      * @param outerRadius  radius of the outermost turn at the wire's centre
      * @param turns        number of turns
@@ -36,7 +37,7 @@ public record CoilSketch(List<Coil> coils, double distance, double offset, Bar w
      * @param backBelow    true when the backing sits below (−z) the winding
      * @param backing      the ferrite plate or shield behind, or null
      */
-    public record Coil(String label, Winding winding, int sides, double aspect, double innerRadius, double outerRadius,
+    public record Coil(String label, Winding winding, int sides, double aspect, double innerAspect, double innerRadius, double outerRadius,
                        double turns, int layers, double wireDiameter, double length, double x, double y, double z,
                        boolean backBelow, Plate backing) { }
 

@@ -67,23 +67,25 @@ public final class Sketches {
             case SOLENOID -> {
                 double len = c.length() != null ? c.length() : c.pitch() != null ? c.pitch() * turns : turns * w;
                 double r = c.diameter() / 2;
-                return new CoilSketch.Coil(label, CoilSketch.Winding.AXIAL, 0, 1, r, r, turns, 1, w, len, x, y, z, backBelow, plate);
+                return new CoilSketch.Coil(label, CoilSketch.Winding.AXIAL, 0, 1, 1, r, r, turns, 1, w, len, x, y, z, backBelow, plate);
             }
             case MULTILAYER -> {
                 int layers = c.layers() != null ? c.layers() : 1;
                 double r0 = c.diameter() / 2 + w / 2;
                 double len = c.length() != null ? c.length() : Math.ceil(turns / layers) * w;
-                return new CoilSketch.Coil(label, CoilSketch.Winding.AXIAL, 0, 1, r0, r0 + (layers - 1) * w, turns, layers,
+                return new CoilSketch.Coil(label, CoilSketch.Winding.AXIAL, 0, 1, 1, r0, r0 + (layers - 1) * w, turns, layers,
                         w, len, x, y, z, backBelow, plate);
             }
             case LOOP -> {
                 double r = c.diameter() / 2;
-                return new CoilSketch.Coil(label, CoilSketch.Winding.FLAT, 0, 1, r, r, turns, 1, w, 0, x, y, z, backBelow, plate);
+                return new CoilSketch.Coil(label, CoilSketch.Winding.FLAT, 0, 1, 1, r, r, turns, 1, w, 0, x, y, z, backBelow, plate);
             }
             case RECT_SPIRAL -> {
                 double outer = c.width() / 2 - w / 2;
                 double inner = c.innerWidth() / 2 + w / 2;
-                return new CoilSketch.Coil(label, CoilSketch.Winding.FLAT, 4, c.height() / c.width(), inner, outer, turns, 1,
+                double outerY = c.height() / 2 - w / 2;
+                double innerY = c.innerHeight() / 2 + w / 2;
+                return new CoilSketch.Coil(label, CoilSketch.Winding.FLAT, 4, outerY / outer, innerY / inner, inner, outer, turns, 1,
                         w, 0, x, y, z, backBelow, plate);
             }
             default -> {
@@ -95,7 +97,7 @@ public final class Sketches {
                 };
                 double outer = c.diameter() / 2 - w / 2;
                 double inner = c.innerDiameter() != null ? c.innerDiameter() / 2 + w / 2 : outer;
-                return new CoilSketch.Coil(label, CoilSketch.Winding.FLAT, sides, 1, inner, outer, turns, 1, w, 0, x, y, z,
+                return new CoilSketch.Coil(label, CoilSketch.Winding.FLAT, sides, 1, 1, inner, outer, turns, 1, w, 0, x, y, z,
                         backBelow, plate);
             }
         }

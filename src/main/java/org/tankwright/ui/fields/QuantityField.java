@@ -59,8 +59,8 @@ public final class QuantityField extends JPanel {
 
     /** Shows {@code si} (from the document) without notifying listeners; clears any error. */
     public void setValue(Double si) {
-        if (problem == null && Objects.equals(si, value) && Objects.equals(parsedText(), si)) {
-            return; // the user's own spelling already says this; keep it
+        if (problem == null && Objects.equals(si, value)) {
+            return; // valid text already says this (in the user's own spelling); keep it
         }
         value = si;
         quiet = true;

@@ -127,6 +127,16 @@ public final class Workspace implements AutoCloseable {
         }
     }
 
+    /** Stops the computation of {@code d} in flight; the last shown result stays. */
+    public void cancel(OpenDesign d) {
+        LatestWins<Design, AnalysisResult> engine = engines.get(d);
+        if (engine != null && d.isComputing()) {
+            engine.cancel();
+            d.shown(null, "stopped by the user; showing the last result", 0);
+            listeners.forEach(l -> l.resultShown(d));
+        }
+    }
+
     /** Records that {@code d} was saved in {@code file}. */
     public void saved(OpenDesign d, Path file) {
         d.setFile(file);

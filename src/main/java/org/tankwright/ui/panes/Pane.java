@@ -42,6 +42,12 @@ public abstract class Pane extends JPanel implements Dockable {
         return style;
     }
 
+    /** A pane's size is set by the docking layout, never by its content: a change inside is laid out here, not across the window. */
+    @Override
+    public boolean isValidateRoot() {
+        return true;
+    }
+
     @Override
     public boolean isWrappableInScrollpane() {
         return false;
