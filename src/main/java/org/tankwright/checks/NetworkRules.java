@@ -164,7 +164,8 @@ final class NetworkRules {
             }
             add(out, Severity.NOTICE, e.unreachable().size(), 0, "", "$.load.target_power_W",
                     "The output target cannot be reached at " + e.unreachable().size() + " envelope point"
-                            + (e.unreachable().size() == 1 ? "" : "s") + ": " + String.join("; ", e.unreachable()) + ".",
+                            + (e.unreachable().size() == 1 ? "" : "s") + ", for example " + String.join("; ", e.unreachable().subList(0, Math.min(3, e.unreachable().size())))
+                            + (e.unreachable().size() > 3 ? " (and " + (e.unreachable().size() - 3) + " more)" : "") + ".",
                     "Raise the bus voltage or the coupling at the weak points, narrow the envelope, or accept less "
                             + "power there.");
         }

@@ -29,6 +29,10 @@ public final class ExitCodes {
                 commandLine.getErr().println("tankwright: " + ue.getMessage());
                 return ue.status();
             }
+            if (ex instanceof org.tankwright.analysis.AnalysisException ae) {
+                commandLine.getErr().println("tankwright: " + (ae.invalidInput() ? "" : "computation refused: ") + ae.getMessage());
+                return ae.invalidInput() ? INVALID_INPUT : REFUSED;
+            }
             if (ex instanceof IllegalArgumentException) {
                 commandLine.getErr().println("tankwright: " + ex.getMessage());
                 return INVALID_INPUT;

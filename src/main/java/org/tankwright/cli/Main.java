@@ -12,9 +12,18 @@ import picocli.CommandLine.Command;
                 CommandLine.HelpCommand.class,
                 OpenCommand.class,
                 ValidateCommand.class,
+                TuneCommand.class,
+                WorkpieceCommand.class,
+                CapsCommand.class,
+                RetuneCommand.class,
+                CoupleCommand.class,
+                FieldCommand.class,
+                CoilCommand.class,
                 SheetCommand.class,
                 ExportCommand.class,
                 CheckCommand.class,
+                SolveCommand.class,
+                ToleranceCommand.class,
         })
 public final class Main implements Runnable {
 

@@ -9,13 +9,13 @@ public record Backing(
         @Field(dim = Dimension.PERMEABILITY, min = 1, doc = "relative permeability of the ferrite") Double muR,
         @Field(dim = Dimension.LENGTH, min = 0, minExclusive = true, required = true, doc = "plate thickness") Double thickness,
         @Field(dim = Dimension.LENGTH, min = 0, required = true,
-                doc = "distance from the winding's mean plane to the plate's face, behind the coil") Double distance,
+                doc = "gap from the back of the winding's conductor to the plate's face (spacer thickness)") Double distance,
         @Field(dim = Dimension.LENGTH, min = 0, minExclusive = true,
                 doc = "plate size across (square or round); should exceed the coil") Double size,
         @Field(dim = Dimension.RESISTIVITY, min = 0, minExclusive = true,
                 doc = "resistivity of a shield (default aluminium)") Double resistivity,
-        @Field(min = 0, minExclusive = true,
-                doc = "measured factor that overrides the modelled change of inductance (L with plate / L without)") Double measuredFactor)
+        @Field(min = -1, max = 1,
+                doc = "image coefficient measured on the real pad; overrides the computed (µr−1)/(µr+1) or −1") Double imageCoefficient)
         implements Checked {
 
     @Override

@@ -135,6 +135,7 @@ public final class DesignFiles {
                 out.flush();
                 ch.force(true);
             }
+            keepPermissions(tmp, abs);
             if (Files.exists(abs)) {
                 Files.copy(abs, backupOf(abs), StandardCopyOption.REPLACE_EXISTING);
             }
@@ -146,6 +147,18 @@ public final class DesignFiles {
         } finally {
             Files.deleteIfExists(tmp);
         }
+    }
+
+    /**
+     * A temporary file is created readable by its owner only; the saved file gets the old file's
+     * permissions, or rw-r--r-- for a new one, where the file system has POSIX permissions.
+     */
+    private static void keepPermissions(Path tmp, Path target) throws IOException {
+        if (!Files.getFileStore(tmp).supportsFileAttributeView(java.nio.file.attribute.PosixFileAttributeView.class)) {
+            return;
+        }
+        Files.setPosixFilePermissions(tmp, Files.exists(target) ? Files.getPosixFilePermissions(target)
+                : java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
     }
 
     /** Where the previous version of a saved file is kept. */

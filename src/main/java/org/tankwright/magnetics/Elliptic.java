@@ -19,7 +19,7 @@ public final class Elliptic {
         }
         double a = 1.0;
         double b = Math.sqrt(1.0 - m);
-        for (int i = 0; i < 64 && Math.abs(a - b) > 1e-16 * a; i++) {
+        for (int i = 0; i < 64 && Math.abs(a - b) > 1e-15 * a; i++) {
             double an = 0.5 * (a + b);
             b = Math.sqrt(a * b);
             a = an;
@@ -44,7 +44,7 @@ public final class Elliptic {
             a = an;
             pow *= 2.0;
             sum += pow * c * c;
-            if (Math.abs(c) <= 1e-17 * a) {
+            if (Math.abs(c) <= 1e-15 * a) {
                 break;
             }
         }

@@ -119,7 +119,10 @@ public final class Workbench {
             }
             BufferedImage[] img = new BufferedImage[1];
             onEdt(() -> { }); // let the panes take the result
+            onEdt(() -> window[0].frame().validate());
+            onEdt(() -> { }); // wrapped text settles its height on the second layout pass
             onEdt(() -> {
+                window[0].frame().invalidate();
                 window[0].frame().validate();
                 img[0] = Snapshot.capture(window[0].frame());
             });

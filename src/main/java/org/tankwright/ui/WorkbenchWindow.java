@@ -222,7 +222,8 @@ public final class WorkbenchWindow {
         redo.putValue(Action.NAME, d != null && d.history().canRedo() ? "Redo " + d.history().redoName() : "Redo");
         frame.setTitle(d == null ? "Tankwright" : (d.isDirty() ? "• " : "") + d.title() + " — Tankwright");
         if (d != null) {
-            status.file(d.file() != null ? d.file().toString() : d.design().name() + " (not saved yet)", d.isDirty());
+            status.file(d.file() != null ? d.file().getFileName().toString() : d.design().name() + " (not saved yet)", d.isDirty());
+            status.setToolTipText(d.file() != null ? d.file().toString() : null);
         }
     }
 

@@ -33,11 +33,11 @@ class ValidateCommandTest {
     @Test
     void listsAllFiveProblemsAndExitsThree(@TempDir Path dir) throws Exception {
         String text = Files.readString(Path.of("presets/desk-lamp-pad.json"))
-                .replace("\"turns\": 12", "\"turns\": -3")
+                .replace("\"turns\": 14", "\"turns\": -3")
                 .replace("\"inner_diameter_m\": \"20 mm\"", "\"inner_diameter_m\": \"20 mH\"")
                 .replace("\"kind\": \"full-bridge\"", "\"kind\": \"triangle\"")
                 .replace("\"resistance_ohm\": \"2.5 Ω\"", "\"resistance_ohm\": \"NaN\"")
-                .replace("\"distance_m\": \"5 mm\"", "\"distance_m\": true");
+                .replace("\"distance_m\": \"8 mm\"", "\"distance_m\": true");
         Path f = dir.resolve("bad.json");
         Files.writeString(f, text);
         int[] st = new int[1];

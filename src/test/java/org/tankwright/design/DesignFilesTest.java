@@ -23,8 +23,8 @@ class DesignFilesTest {
     @Test
     void reportsEveryProblemAtOnceWithItsPath() throws Exception {
         String text = demoText()
-                .replace("\"turns\": 12", "\"turns\": 0")                         // 1: range
-                .replace("\"diameter_m\": \"50 mm\"", "\"diameter_m\": \"50 kHz\"") // 2: wrong unit
+                .replace("\"turns\": 14", "\"turns\": 0")                         // 1: range
+                .replace("\"diameter_m\": \"56 mm\"", "\"diameter_m\": \"56 kHz\"") // 2: wrong unit
                 .replace("\"topology\": \"SS\"", "\"topology\": \"XY\"")            // 3: unknown choice
                 .replace("\"vdc_V\": 12", "\"vdc_V\": -12")                         // 4: negative
                 .replace("\"offset_x_m\": 0", "\"offset_x_mm\": 0");                // 5: unknown key
@@ -37,7 +37,7 @@ class DesignFilesTest {
         assertTrue(paths.contains("$.source.vdc_V"), paths.toString());
         assertTrue(paths.contains("$.placement.offset_x_mm"), paths.toString());
         Problem unit = e.problems().stream().filter(p -> p.path().equals("$.primary.diameter_m")).findFirst().orElseThrow();
-        assertEquals("50 kHz", unit.value());
+        assertEquals("56 kHz", unit.value());
         assertTrue(unit.message().contains("length in m"), unit.message());
     }
 
@@ -84,7 +84,7 @@ class DesignFilesTest {
     void roundTripsThroughJson() throws Exception {
         Design d = DesignFiles.parse(demoText(), "demo");
         assertEquals(d, DesignFiles.parse(DesignFiles.toJson(d), "again"));
-        assertEquals(0.05, d.primary().diameter(), 1e-15);
+        assertEquals(0.056, d.primary().diameter(), 1e-15);
         assertEquals(130e3, d.frequency(), 1e-9);
     }
 

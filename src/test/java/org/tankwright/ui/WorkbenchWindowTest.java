@@ -1,6 +1,7 @@
 package org.tankwright.ui;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertNull;
@@ -27,7 +28,9 @@ class WorkbenchWindowTest {
     void typing4n7IntoC1ChangesTheKeyFigures() throws Exception {
         {
             WorkbenchWindow w = WindowHarness.open(Presets.demo(), Analysis::run);
-            assertEquals("auto", WindowHarness.onEdt(() -> w.figures().valueOf("C1 (primary)")));
+            WindowHarness.await("the demo's first result is shown", () -> !w.figures().valueOf("C1 (primary)").isEmpty());
+            String tuned = WindowHarness.onEdt(() -> w.figures().valueOf("C1 (primary)"));
+            assertNotEquals("4.70 nF", tuned, "the demo's C1 is tuned automatically, not 4.7 nF");
             JTextField field = WindowHarness.onEdt(() -> {
                 OpenDesign d = w.workspace().selected();
                 w.editor().reveal(d, C1);
@@ -93,7 +96,7 @@ class WorkbenchWindowTest {
                     "one undo reverts the whole typed value (one field's keystrokes are one step)");
             assertNull(WindowHarness.onEdt(field::value));
             assertEquals("", WindowHarness.onEdt(() -> field.textField().getText()));
-            WindowHarness.await("the figures follow the undo", () -> "auto".equals(w.figures().valueOf("C1 (primary)")));
+            WindowHarness.await("the figures follow the undo", () -> !"4.70 nF".equals(w.figures().valueOf("C1 (primary)")));
             assertFalse(WindowHarness.onEdt(() -> w.workspace().selected().isDirty()), "back at the opened state");
             WindowHarness.onEdt(() -> {
                 w.workspace().redo(w.workspace().selected());
@@ -124,6 +127,25 @@ class WorkbenchWindowTest {
             assertEquals(file.toAbsolutePath().normalize(), reopened.file());
             assertFalse(WindowHarness.onEdt(reopened::isDirty));
             WindowHarness.await("the reopened design is computed", () -> "4.70 nF".equals(w.figures().valueOf("C1 (primary)")));
+        }
+    }
+
+    @Test
+    void anUnreadableSavedPaneArrangementFallsBackToTheDefault(@TempDir Path dir) throws Exception {
+        WorkbenchWindow w = WindowHarness.open(Presets.demo(), Analysis::run);
+        Path saved = dir.resolve("panes.xml");
+        java.nio.file.Files.writeString(saved, "<not-a-layout");
+        boolean restored = WindowHarness.onEdt(() -> {
+            try {
+                return w.arrangement().restoreAndRemember(saved);
+            } finally {
+                io.github.andrewauclair.moderndocking.app.AppState.setAutoPersist(false);
+            }
+        });
+        assertFalse(restored, "the damaged arrangement is not used");
+        for (String pane : new String[] {"designs", "editor", "figures", "plots", "stress", "checks"}) {
+            assertTrue(WindowHarness.onEdt(() -> io.github.andrewauclair.moderndocking.app.Docking.isDocked(pane)),
+                    pane + " is in place after the fallback");
         }
     }
 

@@ -224,6 +224,7 @@ public abstract class FieldEditor {
             String s = value == null ? "" : value.toString();
             if (!s.equals(field.getText())) {
                 field.setText(s);
+                field.setCaretPosition(0); // show the beginning of a long name or description
             }
         }
     }

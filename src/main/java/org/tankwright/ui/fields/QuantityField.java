@@ -128,7 +128,14 @@ public final class QuantityField extends JPanel {
                 showInvalid(spec.label() + ": is required; allowed " + spec.range());
                 return;
             }
-            parsed = null;
+            // Replacing the text removes it before inserting the new one: wait until the
+            // event is over, and only then take an empty field to mean "absent".
+            javax.swing.SwingUtilities.invokeLater(() -> {
+                if (text.getText().isBlank()) {
+                    commit(null);
+                }
+            });
+            return;
         } else {
             try {
                 parsed = Quantities.parse(text.getText(), spec.dimension());
@@ -142,6 +149,10 @@ public final class QuantityField extends JPanel {
                 return;
             }
         }
+        commit(parsed);
+    }
+
+    private void commit(Double parsed) {
         boolean changed = !Objects.equals(parsed, value);
         value = parsed;
         showValid();

@@ -21,7 +21,7 @@ public final class FiguresPane extends ResultPane {
         }
     };
     private final JLabel state = new JLabel(" ");
-    private final JLabel missing = new JLabel(" ");
+    private final javax.swing.JTextArea missing = new javax.swing.JTextArea(" ");
 
     public FiguresPane(Workspace workspace) {
         super(PaneArrangement.FIGURES, "Key figures", "The selected design's main results", DockableStyle.BOTH, workspace);
@@ -32,7 +32,12 @@ public final class FiguresPane extends ResultPane {
         table.getColumnModel().getColumn(1).setPreferredWidth(110);
         state.setName("figures.state");
         missing.setName("figures.missing");
-        missing.setForeground(javax.swing.UIManager.getColor("Label.disabledForeground"));
+        missing.setEditable(false);
+        missing.setFocusable(false);
+        missing.setOpaque(false);
+        missing.setLineWrap(true);
+        missing.setWrapStyleWord(true);
+        missing.setBorder(javax.swing.BorderFactory.createEmptyBorder(4, 4, 4, 4));
         add(state, java.awt.BorderLayout.NORTH);
         add(new JScrollPane(table));
         add(missing, java.awt.BorderLayout.SOUTH);
@@ -56,7 +61,9 @@ public final class FiguresPane extends ResultPane {
         } else {
             model.set(Readings.of(d.result()));
             String m = Readings.missing(d.result());
-            missing.setText(m == null ? " " : "<html><div style='padding:4px'>" + m + "</div></html>");
+            missing.setText(m == null ? "" : m);
+            missing.setForeground(javax.swing.UIManager.getColor("Label.disabledForeground"));
+            missing.setFont(javax.swing.UIManager.getFont("Label.font"));
             state.setText(d.failure() != null ? " Showing the last good result; the latest failed: " + d.failure()
                     : " " + d.result().design().name());
         }

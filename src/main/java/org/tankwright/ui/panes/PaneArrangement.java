@@ -54,7 +54,7 @@ public final class PaneArrangement {
             try {
                 restored = AppState.restore();
             } catch (DockingLayoutException | RuntimeException e) {
-                System.err.println("tankwright: saved pane arrangement unreadable (" + e.getMessage() + "); using the default");
+                System.err.println("tankwright: saved pane arrangement " + file + " cannot be read (" + (e.getMessage() != null ? e.getMessage() : e.getClass().getSimpleName()) + "); using the default");
                 restored = false;
             }
         }

@@ -1,0 +1,180 @@
+package org.tankwright.analysis;
+
+import org.tankwright.circuit.LinkValues;
+import org.tankwright.design.Design;
+import org.tankwright.design.Workpiece;
+import org.tankwright.heating.BarGeometry;
+import org.tankwright.heating.CoolantFlow;
+import org.tankwright.heating.FrequencyAdvice;
+import org.tankwright.heating.HeatingTime;
+import org.tankwright.heating.LoadedWorkCoil;
+import org.tankwright.heating.LossAllowance;
+import org.tankwright.heating.WorkCoil;
+import org.tankwright.heating.WorkpieceLoad;
+import org.tankwright.heating.WorkpieceMedium;
+import org.tankwright.magnetics.SingleLayerSolenoid;
+import org.tankwright.materials.WorkpieceMaterial;
+import org.tankwright.materials.WorkpieceMaterials;
+import org.tankwright.tuning.LinkDesign;
+import org.tankwright.tuning.TuningResult;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * An induction heater: the work coil loaded by its workpiece, tuned as a single tank at the cold
+ * point, then the hot point with the same capacitor and a driver that follows the tank's
+ * resonance. The coil current and the workpiece's µr(H) are iterated together.
+ */
+final class HeaterStage {
+    static final int ITERATIONS = 6;
+    static final double CURRENT_TOLERANCE = 0.005;
+
+    private HeaterStage() {
+    }
+
+    /** The heater's result: the tuned cold network (the operating point) and the report of both points. */
+    record Heated(TuningResult cold, TuningResult hot, HeaterReport report) {
+    }
+
+    static Heated solve(Design d, CoilStage.Analysed coil) {
+        if (!(coil.geometry() instanceof SingleLayerSolenoid sol)) {
+            throw new AnalysisException("$.primary.shape: the heater models a solenoid work coil around the bar; "
+                    + "a " + coil.report().shape() + " work coil is not modelled", false);
+        }
+        Workpiece w = d.workpiece();
+        WorkpieceMaterial material;
+        try {
+            material = WorkpieceMaterials.builtIn().require(w.material());
+        } catch (IllegalArgumentException e) {
+            throw new AnalysisException("$.workpiece.material: " + e.getMessage(), true);
+        }
+        double coilInner = sol.meanDiameter() - sol.conductor().footprintWidth();
+        if (w.diameter() >= coilInner) {
+            throw new AnalysisException("$.workpiece.diameter_m: the bar (" + w.diameter() * 1e3
+                    + " mm) does not fit inside the work coil's bore (" + Math.round(coilInner * 1e4) / 10.0 + " mm)", true);
+        }
+        double f = d.frequency();
+        double rCoil = coil.report().resistanceAc();
+        WorkCoil wc = new WorkCoil(sol.turns(), sol.turns() * sol.pitch(), coilInner, coil.report().inductance(), rCoil);
+        BarGeometry bar = w.innerDiameter() > 0 ? BarGeometry.tube(w.diameter(), w.innerDiameter(), w.length())
+                : BarGeometry.solid(w.diameter(), w.length());
+        Double fixedC = d.compensation().c1();
+
+        // Cold: the capacitor is tuned (unless fixed) for the loaded coil at the design frequency.
+        WorkpieceMedium coldMedium = new WorkpieceMedium.OfMaterial(material, w.temperatureCold());
+        double current = 10.0;
+        LoadedWorkCoil coldLoad = null;
+        TuningResult cold = null;
+        for (int i = 0; i < ITERATIONS; i++) {
+            coldLoad = WorkpieceLoad.inCoil(wc, bar, coldMedium, f, current);
+            cold = NetworkStage.tune(NetworkStage.linkDesign(d, f,
+                    LinkValues.tank(coldLoad.loadedInductance(), coldLoad.totalResistance()), fixedC == null ? 0 : fixedC, 0));
+            double next = coilCurrent(cold);
+            boolean done = Math.abs(next - current) <= CURRENT_TOLERANCE * next;
+            current = next;
+            if (done) {
+                break;
+            }
+        }
+        double c = cold.c1();
+
+        // Hot: same capacitor; the driver follows the tank's resonance as the load changes.
+        WorkpieceMedium hotMedium = new WorkpieceMedium.OfMaterial(material, w.temperatureHot());
+        double fh = f;
+        double ih = current;
+        LoadedWorkCoil hotLoad = null;
+        TuningResult hot = null;
+        for (int i = 0; i < ITERATIONS; i++) {
+            hotLoad = WorkpieceLoad.inCoil(wc, bar, hotMedium, fh, ih);
+            LinkValues hv = LinkValues.tank(hotLoad.loadedInductance(), hotLoad.totalResistance());
+            fh = samePhaseFrequency(d, hv, c, cold.design().targetPhase(), fh);
+            hot = NetworkStage.tune(NetworkStage.linkDesign(d, fh, hv, c, 0));
+            double next = coilCurrent(hot);
+            boolean done = Math.abs(next - ih) <= CURRENT_TOLERANCE * next;
+            ih = next;
+            if (done) {
+                break;
+            }
+        }
+        HeaterReport.HeaterPoint coldPoint = point(w.temperatureCold(), coldLoad, cold);
+        HeaterReport.HeaterPoint hotPoint = point(w.temperatureHot(), hotLoad, hot);
+
+        double mass = bar.mass(material.density());
+        List<String> notes = new ArrayList<>();
+        notes.add("cold point: capacitor " + (fixedC == null ? "tuned" : "fixed") + " at the design frequency; "
+                + "hot point: same capacitor, the driver follows the tank to the same input phase (common practice for heater drivers)");
+        notes.addAll(coldLoad.provenance().notes());
+        double heatingTime = Double.NaN;
+        try {
+            double pCold = coldPoint.power();
+            double pHot = hotPoint.power();
+            double span = w.temperatureHot() - w.temperatureCold();
+            HeatingTime.Estimate est = HeatingTime.estimate(mass, material, w.temperatureCold(), w.temperatureHot(),
+                    t -> pCold + (pHot - pCold) * Math.min(1, Math.max(0, (t - w.temperatureCold()) / span)),
+                    new LossAllowance.Fraction(w.lossAllowance()));
+            heatingTime = est.reachable() ? est.timeSeconds() : Double.POSITIVE_INFINITY;
+            if (!est.reachable()) {
+                notes.add("the workpiece does not reach " + w.temperatureHot() + " °C with the stated loss allowance");
+            }
+        } catch (IllegalArgumentException e) {
+            notes.add("heating time not estimated: " + e.getMessage());
+        }
+        double worstCoilLoss = Math.max(coldPoint.coilLoss(), hotPoint.coilLoss());
+        CoolantFlow coolant = CoolantFlow.water(worstCoilLoss, w.coolantRise());
+        FrequencyAdvice advice = FrequencyAdvice.forBar(w.diameter(), hotLoad.resistivity(), hotLoad.muR(), f);
+        HeaterReport report = new HeaterReport(coldPoint, hotPoint, Math.min(f, hotPoint.resonantFrequency()),
+                Math.max(f, hotPoint.resonantFrequency()), advice.lowFrequency(), advice.highFrequency(), mass,
+                heatingTime, coolant.volumeFlow(), List.copyOf(notes));
+        return new Heated(cold, hot, report);
+    }
+
+    /**
+     * The frequency at which the tank, with its capacitor fixed, shows the same input phase as at the
+     * cold point: the driver follows the tank (common practice), found by bisection around its resonance.
+     */
+    static double samePhaseFrequency(Design d, LinkValues v, double c, double targetDeg, double guess) {
+        double f0 = 1 / (2 * Math.PI * Math.sqrt(v.l1() * c));
+        org.tankwright.circuit.PhasorSolver s = NetworkStage.tune(NetworkStage.linkDesign(d, f0, v, c, 0)).newSolver();
+        int src = s.network().sourceIndex();
+        double lo = f0 / 3;
+        double hi = f0 * 3;
+        s.solve(lo);
+        double pLo = s.inputPhaseDeg(src) - targetDeg;
+        s.solve(hi);
+        double pHi = s.inputPhaseDeg(src) - targetDeg;
+        if (Math.signum(pLo) == Math.signum(pHi)) {
+            return Math.abs(targetDeg) < 1e-9 ? f0 : guess;
+        }
+        for (int i = 0; i < 60 && hi - lo > 1e-9 * f0; i++) {
+            double mid = Math.sqrt(lo * hi);
+            s.solve(mid);
+            double pm = s.inputPhaseDeg(src) - targetDeg;
+            if (Math.signum(pm) == Math.signum(pLo)) {
+                lo = mid;
+                pLo = pm;
+            } else {
+                hi = mid;
+            }
+        }
+        return Math.sqrt(lo * hi);
+    }
+
+    private static double coilCurrent(TuningResult t) {
+        return t.operatingPoint().stress(org.tankwright.circuit.Topologies.L1).iRms();
+    }
+
+    private static HeaterReport.HeaterPoint point(double temperature, LoadedWorkCoil load, TuningResult t) {
+        var op = t.operatingPoint();
+        var l1 = op.stress(org.tankwright.circuit.Topologies.L1);
+        var c1 = op.stress(org.tankwright.circuit.Topologies.C1);
+        double i = l1.iRms();
+        double workPower = load.workResistance() * i * i;
+        double coilLoss = load.coilResistance() * i * i;
+        LinkDesign ld = t.design();
+        return new HeaterReport.HeaterPoint(temperature, load.muR(), load.resistivity(), load.referenceDepth(),
+                load.workResistance(), load.loadedInductance(), ld.frequency(), workPower, coilLoss,
+                load.workResistance() / (load.workResistance() + load.coilResistance()), i, c1.vRms(), c1.iRms(),
+                load.surfaceField() * i / Math.max(load.coilCurrent(), 1e-12));
+    }
+}

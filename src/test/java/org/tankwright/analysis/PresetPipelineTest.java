@@ -1,0 +1,137 @@
+package org.tankwright.analysis;
+
+import com.google.gson.JsonObject;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.tankwright.design.Design;
+import org.tankwright.report.ResultJson;
+
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/** Every preset through the whole pipeline, held to identities of the physics and to the command-line contract. */
+class PresetPipelineTest {
+    private static final Map<String, AnalysisResult> RESULTS = new LinkedHashMap<>();
+
+    @BeforeAll
+    static void solveAll() throws Exception {
+        for (String name : Presets.names()) {
+            RESULTS.put(name, Analysis.run(Presets.load(name)));
+        }
+    }
+
+    @Test
+    void everyPresetSolvesWithFiniteFigures() {
+        assertEquals(Presets.names().size(), RESULTS.size());
+        for (Map.Entry<String, AnalysisResult> e : RESULTS.entrySet()) {
+            AnalysisResult r = e.getValue();
+            NetworkReport n = r.network();
+            for (double v : new double[] {n.c1(), n.inputPhaseDeg(), n.powerIn(), n.sourceCurrent(), n.loadedQ()}) {
+                assertTrue(Double.isFinite(v), e.getKey() + ": a network figure is not finite");
+            }
+            assertFalse(r.stresses().isEmpty(), e.getKey());
+            assertFalse(r.coils().isEmpty(), e.getKey());
+            for (CoilReport c : r.coils()) {
+                assertTrue(c.inductance() > 0 && c.resistanceAc() > 0 && c.q() > 0, e.getKey() + " " + c.role());
+            }
+            assertNotNull(r.findings(), e.getKey());
+            if (r.design().isLink()) {
+                assertTrue(Math.abs(r.coupling().k()) < 1, e.getKey() + ": |k| < 1");
+                assertTrue(n.efficiency() > 0 && n.efficiency() < 1, e.getKey() + ": 0 < efficiency < 1");
+            }
+        }
+    }
+
+    /** Energy balance (conservation of energy, common practice): the source's power is every element's loss plus the load's. */
+    @Test
+    void sourcePowerEqualsTheSumOfElementPowers() {
+        for (Map.Entry<String, AnalysisResult> e : RESULTS.entrySet()) {
+            AnalysisResult r = e.getValue();
+            double sum = 0;
+            for (ElementStress s : r.stresses()) {
+                if (Double.isFinite(s.loss())) {
+                    sum += s.loss();
+                }
+            }
+            assertEquals(r.network().powerIn(), sum, 1e-6 * r.network().powerIn(), e.getKey());
+        }
+    }
+
+    /** Wang, Covic & Stielau (2004): the secondary is tuned to C2 = 1/(ω²L2) with the coil's in-place inductance. */
+    @Test
+    void secondaryIsTunedByTheTextbookFormula() {
+        for (AnalysisResult r : RESULTS.values()) {
+            if (r.design().isLink()) {
+                double w = 2 * Math.PI * r.design().frequency();
+                assertEquals(1 / (w * w * r.coupling().l2()), r.network().c2Textbook(), 1e-9 * r.network().c2Textbook());
+            }
+        }
+    }
+
+    /** Ohm's law for a capacitor (common practice): the bank's rms voltage is its rms current over ωC. */
+    @Test
+    void capacitorVoltageIsCurrentOverOmegaC() {
+        AnalysisResult r = RESULTS.get("check-my-capacitor");
+        ElementStress c1 = r.stresses().stream().filter(s -> s.id().equals("C1")).findFirst().orElseThrow();
+        double w = 2 * Math.PI * r.design().frequency();
+        // The bank is a series R-L-C (MODELS.md §4): |V| = I·√(ESR² + (1/(ωC) − ωESL)²).
+        double esr = r.banks().isEmpty() ? 0 : r.banks().get(0).esr();
+        double esl = r.banks().isEmpty() ? 0 : r.banks().get(0).esl();
+        double xc = 1 / (w * r.network().c1()) - w * esl;
+        assertEquals(c1.currentRms() * Math.hypot(esr, xc), c1.voltageRms(), 1e-6 * c1.voltageRms());
+    }
+
+    /**
+     * Steel loses its permeability above the Curie point (iron 770 °C, CRC Handbook), so the loaded work
+     * coil's inductance falls from cold to hot; in the current-fed parallel tank, tuned to zero phase, the
+     * frequency then rises (f ≈ 1/(2π√(LC))).
+     */
+    @Test
+    void heaterHotPointFollowsTheLossOfPermeability() {
+        for (String name : List.of("bolt-heater", "small-forge")) {
+            HeaterReport h = RESULTS.get(name).heater();
+            assertTrue(h.cold().muR() > 5, name + ": cold steel is magnetic, µr " + h.cold().muR());
+            assertEquals(1.0, h.hot().muR(), 1e-12, name + ": hot steel above the Curie point");
+            assertTrue(h.hot().inductance() < h.cold().inductance(), name + ": the loaded inductance falls");
+            assertTrue(h.hot().resistivity() > 4 * h.cold().resistivity(), name + ": hot steel's resistivity rises several times");
+            assertTrue(h.frequencyMin() <= Math.min(h.cold().resonantFrequency(), h.hot().resonantFrequency()));
+            assertTrue(h.frequencyMax() >= Math.max(h.cold().resonantFrequency(), h.hot().resonantFrequency()));
+        }
+        HeaterReport bolt = RESULTS.get("bolt-heater").heater();
+        assertTrue(bolt.hot().resonantFrequency() > bolt.cold().resonantFrequency(), "zero-phase parallel tank: f rises as L falls");
+        double ratio = bolt.hot().resonantFrequency() / bolt.cold().resonantFrequency();
+        double expected = Math.sqrt(bolt.cold().inductance() / bolt.hot().inductance());
+        assertEquals(expected, ratio, 0.02 * expected, "f ∝ 1/√L at a fixed capacitor");
+    }
+
+    /** The contract of issue 5: `solve --json` carries the operating point under the keys of `tune --json`. */
+    @Test
+    void solveJsonHasTheTuneKeys() {
+        List<String> keys = List.of("c1_F", "c2_F", "c1_textbook_F", "c2_textbook_F", "input_impedance_ohm",
+                "input_phase_deg", "p_in_W", "p_out_W", "efficiency", "i_source_A", "i_dc_A", "i_l1_A", "i_l2_A",
+                "v_l1_V", "v_l2_V", "v_c1_V", "v_c2_V", "i_c1_A", "i_c2_A", "v_c1_peak_V", "v_c2_peak_V", "load_ac_ohm",
+                "zero_phase_frequencies_Hz", "efficiency_max", "load_optimal_ohm");
+        JsonObject o = ResultJson.tree(RESULTS.get(Presets.DEMO));
+        for (String k : keys) {
+            assertTrue(o.has(k), "solve --json lacks " + k);
+        }
+        assertTrue(o.getAsJsonObject("input_impedance_ohm").has("re"));
+        assertTrue(o.has("findings") && o.has("coils") && o.has("stresses"));
+    }
+
+    @Test
+    void operatingPointScopeAgreesWithTheFullRunWithoutAnEnvelope() throws Exception {
+        Design d = Presets.load("check-my-capacitor");
+        AnalysisResult quick = Analysis.run(d, Analysis.Scope.OPERATING_POINT);
+        AnalysisResult full = RESULTS.get("check-my-capacitor");
+        assertEquals(full.network().c1(), quick.network().c1(), 0.0);
+        assertEquals(full.network().powerIn(), quick.network().powerIn(), 1e-9 * full.network().powerIn());
+        assertTrue(quick.network().sweeps().isEmpty() && !full.network().sweeps().isEmpty());
+    }
+}
