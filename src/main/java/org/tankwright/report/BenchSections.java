@@ -22,6 +22,9 @@ final class BenchSections {
     /** Measured-to-design frequency ratios the re-tune table lists. */
     static final double[] RETUNE_RATIOS = {0.90, 0.95, 0.97, 0.99, 1.01, 1.03, 1.05, 1.10};
 
+    /** How many unreachable envelope points the sheet names (the JSON export has them all). */
+    static final int UNREACHABLE_SHOWN = 3;
+
     private BenchSections() {
     }
 
@@ -113,8 +116,11 @@ final class BenchSections {
             }
             flow.table(w);
         }
-        if (!e.unreachable().isEmpty()) {
-            flow.paragraph("The output target cannot be reached at: " + String.join("; ", e.unreachable()) + ".");
+        List<String> u = e.unreachable();
+        if (!u.isEmpty()) {
+            flow.paragraph("The output target cannot be reached at " + u.size() + " envelope point" + (u.size() == 1 ? "" : "s")
+                    + ", for example: " + String.join("; ", u.subList(0, Math.min(UNREACHABLE_SHOWN, u.size())))
+                    + (u.size() > UNREACHABLE_SHOWN ? "; and " + (u.size() - UNREACHABLE_SHOWN) + " more." : "."));
         }
     }
 
