@@ -250,9 +250,10 @@ class TuningSheetTest {
         List<String> found = new ArrayList<>();
         for (int p = 0; p < pages.size(); p++) {
             List<float[]> boxes = pages.get(p);
+            boxes.sort((u, v) -> Float.compare(u[1], v[1]));
             for (int i = 0; i < boxes.size(); i++) {
-                for (int j = i + 1; j < boxes.size(); j++) {
-                    float[] a = boxes.get(i);
+                float[] a = boxes.get(i);
+                for (int j = i + 1; j < boxes.size() && boxes.get(j)[1] < a[1] + a[3]; j++) {
                     float[] b = boxes.get(j);
                     float ox = Math.min(a[0] + a[2], b[0] + b[2]) - Math.max(a[0], b[0]);
                     float oy = Math.min(a[1] + a[3], b[1] + b[3]) - Math.max(a[1], b[1]);
