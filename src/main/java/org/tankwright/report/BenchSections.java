@@ -1,8 +1,9 @@
 package org.tankwright.report;
 
+import org.tankwright.capacitors.Retune;
+
 import org.jfree.chart.JFreeChart;
 import org.tankwright.analysis.AnalysisResult;
-import org.tankwright.analysis.BenchRetune;
 import org.tankwright.analysis.CoilReport;
 import org.tankwright.analysis.EnvelopeReport;
 import org.tankwright.analysis.ExposureReport;
@@ -220,11 +221,12 @@ final class BenchSections {
             row.add(Fmt.build(fm, Dimension.FREQUENCY));
             for (String id : ids) {
                 double c = net.part(id).value();
-                double needed = BenchRetune.capacitanceNeeded(c, f, fm);
+                Retune.Result rt = Retune.fromMeasuredFrequency(f, c, fm, List.of());
+                double needed = rt.capacitanceNeeded();
                 row.add(Fmt.build(needed, Dimension.CAPACITANCE));
                 row.add(needed >= c ? "add " + Fmt.reading(needed - c, Dimension.CAPACITANCE) + " in parallel"
                         : "remove " + Fmt.reading(c - needed, Dimension.CAPACITANCE) + ", or add "
-                                + Fmt.reading(BenchRetune.seriesTrim(c, needed), Dimension.CAPACITANCE) + " in series");
+                                + Fmt.reading(rt.seriesCapacitance(), Dimension.CAPACITANCE) + " in series");
             }
             t.row(row.toArray(String[]::new));
         }

@@ -2,7 +2,7 @@ package org.tankwright.report;
 
 import org.junit.jupiter.api.Test;
 import org.tankwright.analysis.AnalysisResult;
-import org.tankwright.analysis.BenchRetune;
+import org.tankwright.capacitors.Retune;
 import org.tankwright.analysis.ElementStress;
 import org.tankwright.analysis.ResultFixtures;
 
@@ -75,15 +75,16 @@ class BenchReadingsTest {
         double c = 47e-9;
         double fd = 100e3;
         double fm = 95e3;
-        double needed = BenchRetune.capacitanceNeeded(c, fd, fm);
+        Retune.Result r = Retune.fromMeasuredFrequency(fd, c, fm, java.util.List.of());
+        double needed = r.capacitanceNeeded();
         // f = 1/(2π√(LC)) (Thomson): L as built from the measurement, then C for the design frequency
-        double l = BenchRetune.inductanceAsBuilt(c, fm);
+        double l = 1 / (Math.pow(2 * Math.PI * fm, 2) * c);
+        assertEquals(l, r.inductance(), l * 1e-12);
         assertEquals(1 / (Math.pow(2 * Math.PI * fd, 2) * l), needed, needed * 1e-12);
-        assertEquals(c, BenchRetune.capacitanceNeeded(c, fd, fd), 0.0);
-        double trim = BenchRetune.seriesTrim(c, needed);
+        assertEquals(c * (fm / fd) * (fm / fd), needed, needed * 1e-12, "C·(f_meas/f_design)²");
+        double trim = r.seriesCapacitance();
         assertEquals(needed, c * trim / (c + trim), needed * 1e-12, "series combination gives the needed value");
-        assertThrows(IllegalArgumentException.class, () -> BenchRetune.seriesTrim(c, 2 * c));
-        assertThrows(IllegalArgumentException.class, () -> BenchRetune.capacitanceNeeded(0, fd, fm));
+        assertThrows(IllegalArgumentException.class, () -> Retune.fromMeasuredFrequency(fd, 0, fm, java.util.List.of()));
     }
 
     private static BenchReadings.Reading find(BenchReadings.Plan p, String start) {
