@@ -37,7 +37,7 @@ class ValidateCommandTest {
                 .replace("\"inner_diameter_m\": \"20 mm\"", "\"inner_diameter_m\": \"20 mH\"")
                 .replace("\"kind\": \"full-bridge\"", "\"kind\": \"triangle\"")
                 .replace("\"resistance_ohm\": \"2.5 Ω\"", "\"resistance_ohm\": \"NaN\"")
-                .replace("\"distance_m\": \"8 mm\"", "\"distance_m\": true");
+                .replace("\"distance_m\": \"10 mm\"", "\"distance_m\": true");
         Path f = dir.resolve("bad.json");
         Files.writeString(f, text);
         int[] st = new int[1];
