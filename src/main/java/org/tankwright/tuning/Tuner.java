@@ -54,8 +54,9 @@ public final class Tuner {
         PhasorSolver s = new PhasorSolver(network(d, c, 0, 0));
         PhaseSolve phase = null;
         List<String> notes = new ArrayList<>();
-        if (d.c1() <= 0 && d.targetPhase() != 0) {
-            // A bridge-driven tank is tuned a little inductive so the bridge switches at zero voltage.
+        if (d.c1() <= 0) {
+            // The capacitor that gives the target phase with the coil's resistance (a low-Q parallel tank's
+            // zero-phase point lies below 1/(2π√(LC))); a bridge-driven tank aims a little inductive.
             phase = ZeroPhaseSolver.solve(s, d.frequency(), d.targetPhase(), cText);
             c = phase.c1();
             if (!phase.reached()) {
