@@ -17,6 +17,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
+import java.util.concurrent.TimeUnit;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
@@ -27,8 +28,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 /**
  * Every {@code ./tankwright ...} line in the code blocks of docs/guide.md and README.md runs as
  * written, in-process through {@link Main#run}: outputs go to a temporary folder, a window without
- * {@code --snapshot} is not opened, a snapshot only when a display exists. A line's comment may
- * state another expected exit status ("exit status 5").
+ * {@code --snapshot} is not opened, a snapshot only when a display exists — and in a child JVM,
+ * because the window's docking framework allows one workbench per JVM and the window tests share
+ * theirs. A line's comment may state another expected exit status ("exit status 5").
  */
 class GuideCommandsTest {
     private static final Set<String> OUTPUT_OPTIONS = Set.of("-o", "--out", "--snapshot", "--csv", "--json", "--netlist");
@@ -57,7 +59,7 @@ class GuideCommandsTest {
         assertTrue(checks.size() >= 2, "the mains-fed presets' checks are marked as exit status 5: " + checks);
     }
 
-    private void run(Line l) throws IOException {
+    private void run(Line l) throws IOException, InterruptedException {
         List<String> args = new ArrayList<>(l.args());
         boolean window = args.isEmpty() || args.get(0).equals("open");
         if (window && !args.contains("--snapshot")) {
@@ -75,14 +77,7 @@ class GuideCommandsTest {
                 args.set(i, dir.resolve(Path.of(a).getFileName()).toString());
             }
         }
-        PrintStream stdout = System.out;
-        int status;
-        try (PrintStream sink = new PrintStream(Files.newOutputStream(dir.resolve("stdout.txt")), true, "UTF-8")) {
-            System.setOut(sink);
-            status = Main.run(args.toArray(String[]::new));
-        } finally {
-            System.setOut(stdout);
-        }
+        int status = window ? childJvm(args, dir.resolve("stdout.txt")) : inProcess(args, dir.resolve("stdout.txt"));
         assertEquals(l.status(), status, "`" + l.text() + "` (" + l.doc() + " line " + l.number() + ") exits with "
                 + status + "; output: " + Files.readString(dir.resolve("stdout.txt")));
         for (int i = 1; i < args.size(); i++) {
@@ -90,6 +85,28 @@ class GuideCommandsTest {
                 assertTrue(Files.exists(Path.of(args.get(i))), "`" + l.text() + "` wrote " + l.args().get(i));
             }
         }
+    }
+
+    private static int inProcess(List<String> args, Path log) throws IOException {
+        PrintStream stdout = System.out;
+        try (PrintStream sink = new PrintStream(Files.newOutputStream(log), true, "UTF-8")) {
+            System.setOut(sink);
+            return Main.run(args.toArray(String[]::new));
+        } finally {
+            System.setOut(stdout);
+        }
+    }
+
+    private static int childJvm(List<String> args, Path log) throws IOException, InterruptedException {
+        List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "-cp", System.getProperty("java.class.path"), Main.class.getName()));
+        cmd.addAll(args);
+        Process p = new ProcessBuilder(cmd).redirectErrorStream(true).redirectOutput(log.toFile()).start();
+        if (!p.waitFor(60, TimeUnit.SECONDS)) {
+            p.destroyForcibly();
+            return -1;
+        }
+        return p.exitValue();
     }
 
     /** The command lines of the fenced code blocks of a document, globs expanded against the repository. */
