@@ -107,6 +107,11 @@ public final class BenchRun {
         if (items.contains(Item.WINDOW)) {
             window(md);
         }
+        double end = java.lang.management.ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage();
+        md.append("## Load during the run\n\n");
+        md.append("Load average (1 min) when the run ended: ").append(end >= 0 ? String.format(Locale.ROOT, "%.2f", end) : "unknown")
+                .append(" on ").append(Runtime.getRuntime().availableProcessors()).append(" processors. ")
+                .append("Other programs running at the same time lengthen the wall times; compare medians from runs at a similar load.\n");
         return md.toString();
     }
 

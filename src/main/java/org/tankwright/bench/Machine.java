@@ -45,6 +45,8 @@ public record Machine(int cores, long memoryBytes, long maxHeapBytes, String jav
         if (loadAverage > cores) {
             sb.append(" — more runnable work than processors: the machine was shared and loaded, so wall times are "
                     + "longer and noisier than on an idle machine");
+        } else if (loadAverage >= 1) {
+            sb.append(" — other work was running: the machine was shared, so wall times are noisier than on an idle machine");
         }
         sb.append('\n');
         return sb.toString();

@@ -23,7 +23,7 @@ class BenchCommandTest {
         assertTrue(md.contains("## Machine") && md.contains("processors available to the JVM: "
                 + Runtime.getRuntime().availableProcessors()), "the machine is stated");
         assertTrue(md.contains("- Java: " + System.getProperty("java.version")), "the Java version is stated");
-        assertTrue(md.contains("load average"), "the load is stated");
+        assertTrue(md.contains("Load average (1 min) when the run ended"), "the load is stated");
         assertTrue(md.contains("## Frequency sweep") && md.contains("| 2,000-point sweep | "), md);
         assertTrue(md.contains("## Mutual inductance of two 20-turn coils with offset"), md);
         assertTrue(md.contains("direct Neumann") && md.contains("faster (median wall times;"), "the ratio is stated");
