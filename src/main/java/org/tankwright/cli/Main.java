@@ -24,6 +24,7 @@ import picocli.CommandLine.Command;
                 CheckCommand.class,
                 SolveCommand.class,
                 ToleranceCommand.class,
+                BenchCommand.class,
         })
 public final class Main implements Runnable {
 

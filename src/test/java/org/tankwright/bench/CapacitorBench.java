@@ -1,24 +1,17 @@
 package org.tankwright.bench;
 
-import org.tankwright.capacitors.BankEvaluator;
-import org.tankwright.capacitors.BankLayout;
 import org.tankwright.capacitors.BankRequest;
 import org.tankwright.capacitors.BankSearchResult;
 import org.tankwright.capacitors.BankStress;
 import org.tankwright.capacitors.BankSynthesis;
 import org.tankwright.capacitors.CapacitorBank;
 import org.tankwright.capacitors.CapacitorPart;
-import org.tankwright.capacitors.CatalogueReader;
-import org.tankwright.capacitors.ESeries;
-import org.tankwright.capacitors.PartTemplate;
-import org.tankwright.capacitors.TrimPosition;
 import org.tankwright.tolerance.Limit;
 import org.tankwright.tolerance.Parameter;
 import org.tankwright.tolerance.StudyResult;
 import org.tankwright.tolerance.TemperatureRange;
 import org.tankwright.tolerance.ToleranceStudy;
 
-import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
@@ -31,12 +24,7 @@ import java.util.Locale;
  */
 public final class CapacitorBench {
     public static void main(String[] args) {
-        List<CapacitorPart> parts = new ArrayList<>(CatalogueReader.demo().parts());
-        for (CapacitorPart p : PartTemplate.named("c0g-1000v").parts(ESeries.E24, 1e-9, 22e-9)) {
-            if (parts.size() < 300) {
-                parts.add(p);
-            }
-        }
+        List<CapacitorPart> parts = BankComparison.catalogue();
         System.out.println("catalogue: " + parts.size() + " parts");
         double[][] cases = {{47e-9, 400, 5, 100e3}, {220e-9, 800, 0, 30e3}, {10e-9, 1500, 0, 200e3}, {1e-6, 300, 0, 20e3}};
         for (int w = 0; w < 40; w++) { // warm the JIT on every case before timing any
@@ -52,11 +40,11 @@ public final class CapacitorBench {
                     c[0], c[1], c[2], c[3], ms, r.evaluated(), r.best() == null ? "none" : r.best().layout().describe());
         }
         // pruned vs brute force with smaller bounds (the brute force evaluates every layout)
-        BankRequest small = BankRequest.of(47e-9, 0.02, BankStress.sinusoidal(400, 5, 0, 100e3)).withBounds(4, 8, true, 5);
+        BankRequest small = BankComparison.request();
         double pruned = median(() -> BankSynthesis.search(small, parts), 9);
         long[] count = new long[1];
         long t0 = java.lang.management.ManagementFactory.getThreadMXBean().getCurrentThreadCpuTime();
-        List<CapacitorBank> brute = bruteForce(small, parts, count);
+        List<CapacitorBank> brute = BankComparison.bruteForce(small, parts, count);
         double bruteMs = (java.lang.management.ManagementFactory.getThreadMXBean().getCurrentThreadCpuTime() - t0) / 1e6;
         BankSearchResult r = BankSynthesis.search(small, parts);
         boolean same = brute.stream().map(b -> b.layout().describe()).toList()
@@ -83,34 +71,6 @@ public final class CapacitorBench {
         StudyResult sr = study.run();
         System.out.printf(Locale.ROOT, "tolerance study 10,000 samples: %.2f ms CPU median; f0 mean %.1f Hz, std %.1f Hz, yield %.3f%n",
                 tms, sr.outcome("f0_Hz").mean(), sr.outcome("f0_Hz").std(), sr.overallYield());
-    }
-
-    static List<CapacitorBank> bruteForce(BankRequest req, List<CapacitorPart> parts, long[] count) {
-        BankEvaluator ev = new BankEvaluator(req);
-        java.util.Map<String, CapacitorBank> best = new java.util.HashMap<>();
-        for (CapacitorPart p : parts) {
-            for (int n = 1; n <= req.maxSeries(); n++) {
-                for (int m = 1; m <= req.maxParallel(); m++) {
-                    List<BankLayout> ls = new ArrayList<>();
-                    ls.add(BankLayout.of(p, n, m));
-                    for (CapacitorPart t : parts) {
-                        ls.add(new BankLayout(p, n, m, t, TrimPosition.PARALLEL));
-                        ls.add(new BankLayout(p, n, m, t, TrimPosition.SERIES));
-                    }
-                    for (BankLayout l : ls) {
-                        count[0]++;
-                        if (Math.abs(l.capacitance() / req.targetCapacitance() - 1) > req.maxDeviation()) {
-                            continue;
-                        }
-                        CapacitorBank b = ev.evaluate(l);
-                        if (b.feasible()) {
-                            best.merge(p.id() + "|" + n + "|" + m, b, (a, c) -> BankSynthesis.ORDER.compare(a, c) <= 0 ? a : c);
-                        }
-                    }
-                }
-            }
-        }
-        return best.values().stream().sorted(BankSynthesis.ORDER).limit(req.alternatives()).toList();
     }
 
     /** Median thread CPU time (ms) over runs after 40 warm-up runs (JIT): CPU time, since the machine is shared. */

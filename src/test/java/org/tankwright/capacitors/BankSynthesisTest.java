@@ -3,9 +3,7 @@ package org.tankwright.capacitors;
 import org.junit.jupiter.api.Test;
 
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.SplittableRandom;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -17,32 +15,7 @@ class BankSynthesisTest {
 
     /** Every layout within the bounds, evaluated: the reference the pruned search must equal. */
     static List<CapacitorBank> bruteForce(BankRequest req, List<CapacitorPart> parts) {
-        BankEvaluator ev = new BankEvaluator(req);
-        Map<String, CapacitorBank> bestPerKey = new LinkedHashMap<>();
-        for (CapacitorPart p : parts) {
-            for (int n = 1; n <= req.maxSeries(); n++) {
-                for (int m = 1; m <= req.maxParallel(); m++) {
-                    List<BankLayout> layouts = new ArrayList<>();
-                    layouts.add(BankLayout.of(p, n, m));
-                    if (req.allowTrim()) {
-                        for (CapacitorPart t : parts) {
-                            layouts.add(new BankLayout(p, n, m, t, TrimPosition.PARALLEL));
-                            layouts.add(new BankLayout(p, n, m, t, TrimPosition.SERIES));
-                        }
-                    }
-                    for (BankLayout l : layouts) {
-                        if (Math.abs(l.capacitance() / req.targetCapacitance() - 1) > req.maxDeviation()) {
-                            continue;
-                        }
-                        CapacitorBank b = ev.evaluate(l);
-                        if (b.feasible()) {
-                            bestPerKey.merge(BankSynthesis.mainKey(l), b, (a, c) -> BankSynthesis.ORDER.compare(a, c) <= 0 ? a : c);
-                        }
-                    }
-                }
-            }
-        }
-        return bestPerKey.values().stream().sorted(BankSynthesis.ORDER).limit(req.alternatives()).toList();
+        return org.tankwright.bench.BankComparison.bruteForce(req, parts, new long[1]);
     }
 
     static List<CapacitorPart> smallCatalogue(long seed) {

@@ -106,15 +106,9 @@ public final class CouplingBench {
                 (System.nanoTime() - t5) / 1e6 / reps3);
     }
 
-    /** Direct Neumann over every ring pair of two equal coaxial-frame spirals, n × n trapezoid per pair. */
     private static double neumannTotal(List<Filament> rings, double dz, double dx, int n) {
-        double s = 0;
-        for (Filament f : rings) {
-            for (Filament g : rings) {
-                s += Neumann.rings(((org.tankwright.magnetics.Ring) f).radius(), ((org.tankwright.magnetics.Ring) g).radius(), dz, dx, n);
-            }
-        }
-        return s;
+        double[] r = org.tankwright.bench.BenchCoils.radii(rings);
+        return org.tankwright.bench.NeumannReference.ringCoils(r, r, dz, dx, n);
     }
 
     private static List<Filament> squareSpiral(int turns, double outerSide, double pitch, double wire) {

@@ -1,5 +1,6 @@
 package org.tankwright.coupling;
 
+import org.tankwright.bench.NeumannReference;
 import org.junit.jupiter.api.Test;
 import org.tankwright.magnetics.Filament;
 import org.tankwright.magnetics.Segment;
@@ -23,8 +24,8 @@ class CouplingSweepTest {
         assertTrue(root.isPresent());
         double x = root.getAsDouble();
         double d = link.distanceForGap(0.018);
-        assertTrue(Neumann.rings(0.1, 0.1, d, x - 1e-5, 1200) > 0, "M > 0 just inside the null");
-        assertTrue(Neumann.rings(0.1, 0.1, d, x + 1e-5, 1200) < 0, "M < 0 just beyond the null");
+        assertTrue(NeumannReference.rings(0.1, 0.1, d, x - 1e-5, 1200) > 0, "M > 0 just inside the null");
+        assertTrue(NeumannReference.rings(0.1, 0.1, d, x + 1e-5, 1200) < 0, "M < 0 just beyond the null");
         assertTrue(CouplingSweep.nullOffset(link, 0.018, 0, 0.5 * x).isEmpty(), "no null short of it");
     }
 

@@ -1,5 +1,6 @@
 package org.tankwright.coupling;
 
+import org.tankwright.bench.NeumannReference;
 import org.junit.jupiter.api.Test;
 import org.tankwright.magnetics.MutualKernels;
 import org.tankwright.units.Constants;
@@ -19,7 +20,7 @@ class RingKernelTest {
             // (about 6e-11 relative at k² = 0.0025); the Neumann check below is the tight one.
             assertEquals(MutualKernels.coaxialRings(c[0], c[1], c[2]), m, 1e-9 * Math.abs(m), "Maxwell closed form");
             // Neumann's double integral computed directly, slowly
-            double ref = Neumann.rings(c[0], c[1], c[2], 0, 1200);
+            double ref = NeumannReference.rings(c[0], c[1], c[2], 0, 1200);
             assertEquals(ref, m, 1e-10 * Math.abs(ref), "Neumann double integral");
             assertEquals(m, RingKernel.mutual(c[0], c[1], c[2], 0), 0, "lateral 0 reduces to Maxwell");
         }
@@ -51,7 +52,7 @@ class RingKernelTest {
                 {0.3, 0.1, 0.1, 0.4}, {0.1, 0.1, 0.01, 0.1}, {0.05, 0.2, 0.03, 0.2}};
         for (double[] c : cases) {
             double m = RingKernel.mutual(c[0], c[1], c[2], c[3]);
-            double ref = Neumann.rings(c[0], c[1], c[2], c[3], 1600);
+            double ref = NeumannReference.rings(c[0], c[1], c[2], c[3], 1600);
             assertEquals(ref, m, 1e-8 * Math.abs(ref) + 1e-17, "Neumann double integral, case " + java.util.Arrays.toString(c));
             // M12 = M21: exchange the rings
             assertEquals(m, RingKernel.mutual(c[1], c[0], -c[2], c[3]), 1e-9 * Math.abs(m) + 1e-18, "reciprocity");

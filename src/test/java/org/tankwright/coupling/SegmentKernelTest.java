@@ -1,5 +1,6 @@
 package org.tankwright.coupling;
 
+import org.tankwright.bench.NeumannReference;
 import org.junit.jupiter.api.Test;
 import org.tankwright.magnetics.Filament;
 import org.tankwright.magnetics.Ring;
@@ -30,7 +31,7 @@ class SegmentKernelTest {
         };
         for (double[][] c : cases) {
             double m = SegmentKernel.mutual(seg(c[0]), seg(c[1]));
-            double ref = Neumann.segments(c[0], c[1], 24);
+            double ref = NeumannReference.segments(c[0], c[1], 24);
             assertEquals(ref, m, 1e-9 * Math.abs(ref), "numerical Neumann double integral");
             double back = SegmentKernel.mutual(seg(c[1]), seg(c[0]));
             assertEquals(m, back, 1e-12 * Math.abs(m), "M12 = M21");

@@ -14,11 +14,7 @@ final class TestCoils {
 
     /** A flat spiral approximated by concentric rings in the plane z = 0. */
     static List<Filament> spiral(int turns, double innerRadius, double pitch, double wireRadius) {
-        List<Filament> rings = new ArrayList<>();
-        for (int i = 0; i < turns; i++) {
-            rings.add(new Ring(0, 0, 0, innerRadius + i * pitch, wireRadius));
-        }
-        return rings;
+        return org.tankwright.bench.BenchCoils.spiral(turns, innerRadius, pitch, wireRadius);
     }
 
     /** A single-layer solenoid approximated by coaxial rings, centred on z = 0. */
