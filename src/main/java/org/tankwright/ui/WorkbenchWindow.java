@@ -232,6 +232,79 @@ public final class WorkbenchWindow {
         }
     }
 
+    /** The shown result of the selected design, or a message saying there is none yet. */
+    private org.tankwright.analysis.AnalysisResult shownResult() {
+        org.tankwright.analysis.AnalysisResult r = workspace.selected() == null ? null : workspace.selected().result();
+        if (r == null) {
+            JOptionPane.showMessageDialog(frame, "The selected design has no computed result yet.", "Export",
+                    JOptionPane.INFORMATION_MESSAGE);
+        }
+        return r;
+    }
+
+    private void exportSheet() {
+        org.tankwright.analysis.AnalysisResult r = shownResult();
+        if (r == null) {
+            return;
+        }
+        javax.swing.JFileChooser chooser = new javax.swing.JFileChooser();
+        chooser.setSelectedFile(new java.io.File(r.design().name().replaceAll("[^A-Za-z0-9._-]+", "-") + "-sheet.pdf"));
+        if (chooser.showSaveDialog(frame) != javax.swing.JFileChooser.APPROVE_OPTION) {
+            return;
+        }
+        Path target = chooser.getSelectedFile().toPath();
+        String name = workspace.selected().file() != null ? workspace.selected().file().getFileName().toString() : r.design().name();
+        exportInBackground("tuning sheet", target, () -> org.tankwright.report.TuningSheet.write(r, target,
+                org.tankwright.report.Paper.A4, org.tankwright.report.SheetInfo.today(name, org.tankwright.cli.VersionInfo.version())));
+    }
+
+    private void exportData() {
+        org.tankwright.analysis.AnalysisResult r = shownResult();
+        if (r == null) {
+            return;
+        }
+        javax.swing.JFileChooser chooser = new javax.swing.JFileChooser();
+        chooser.setFileSelectionMode(javax.swing.JFileChooser.DIRECTORIES_ONLY);
+        if (chooser.showSaveDialog(frame) != javax.swing.JFileChooser.APPROVE_OPTION) {
+            return;
+        }
+        Path dir = chooser.getSelectedFile().toPath();
+        exportInBackground("data", dir, () -> {
+            org.tankwright.report.SeriesCsv.write(r, dir.resolve("sweeps"));
+            org.tankwright.report.ResultJson.write(r, dir.resolve("result.json"));
+            if (r.network() != null) {
+                org.tankwright.report.SpiceNetlist.write(r, dir.resolve("network.cir"));
+            }
+        });
+    }
+
+    /** Files are written off the event thread; the outcome is shown on it. */
+    private void exportInBackground(String what, Path target, ExportJob job) {
+        Thread t = new Thread(() -> {
+            String message;
+            int kind;
+            try {
+                job.run();
+                message = "Wrote the " + what + " to " + target;
+                kind = JOptionPane.INFORMATION_MESSAGE;
+            } catch (Exception ex) {
+                message = "Could not write the " + what + " to " + target + ": " + ex.getMessage();
+                kind = JOptionPane.ERROR_MESSAGE;
+            }
+            String m = message;
+            int k = kind;
+            javax.swing.SwingUtilities.invokeLater(() -> JOptionPane.showMessageDialog(frame, m, "Export", k));
+        }, "tankwright-export");
+        t.setDaemon(true);
+        t.start();
+    }
+
+    /** A file-writing job that may fail. */
+    @FunctionalInterface
+    private interface ExportJob {
+        void run() throws Exception;
+    }
+
     private JMenuBar menus() {
         JMenuBar bar = new JMenuBar();
         JMenu file = new JMenu("File");
@@ -284,6 +357,12 @@ public final class WorkbenchWindow {
         file.add(Actions.of("Save as…", KeyEvent.VK_S, true, "Save the selected design in a new file",
                 () -> files.saveAsWithDialog(workspace.selected())));
         file.add(Actions.of("Close design", KeyEvent.VK_W, false, "Close the selected design", () -> files.close(workspace.selected())));
+        file.addSeparator();
+        file.add(Actions.of("Export tuning sheet (PDF)…", KeyEvent.VK_P, false,
+                "Write the bench tuning sheet of the selected design's shown result", this::exportSheet));
+        file.add(Actions.of("Export data (CSV, JSON, netlist)…", KeyEvent.VK_E, true,
+                "Write every sweep as CSV, the result as JSON and the tuned network as a SPICE netlist into a folder",
+                this::exportData));
         file.addSeparator();
         file.add(Actions.of("Quit", KeyEvent.VK_Q, false, "Close the window", this::quit));
         bar.add(file);
