@@ -76,8 +76,15 @@ public final class Analysis {
             tuned = withBanks(d, tuned, null, banks, notes, false);
         }
         if (heated != null && BankStage.enabled(d)) {
-            // The heater's tank capacitor is sized for the worse of its cold and hot points.
-            addBank(d, tuned.operatingPoint(), EnvelopeStage.heater(heated, d), "C1", tuned.c1(), banks, notes);
+            // The heater's tank capacitor is sized for the worse of its cold and hot points, then both
+            // points are solved again with the bank's real capacitance, ESR and ESL.
+            BankStage.Chosen c = addBank(d, tuned.operatingPoint(), EnvelopeStage.heater(heated, d), "C1", tuned.c1(), banks, notes);
+            if (c != null) {
+                heated = HeaterStage.solve(d, primary, new HeaterStage.Bank(c.bank().capacitance(), c.bank().esr(), c.bank().esl()));
+                heater = heated.report();
+                tuned = heated.cold();
+                notes.add("heater solved again with the chosen bank's real capacitance, ESR and ESL");
+            }
         }
         NetworkReport network = NetworkStage.report(tuned, full);
         EnvelopeReport envelope = full && EnvelopeStage.applies(d) ? EnvelopeStage.link(d, tuned, linked)

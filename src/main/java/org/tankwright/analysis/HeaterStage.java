@@ -37,7 +37,16 @@ final class HeaterStage {
     record Heated(TuningResult cold, TuningResult hot, HeaterReport report) {
     }
 
+    /** A real capacitor bank put in place of the tuned capacitor: its capacitance, ESR and ESL. */
+    record Bank(double capacitance, double esr, double esl) {
+    }
+
     static Heated solve(Design d, CoilStage.Analysed coil) {
+        return solve(d, coil, null);
+    }
+
+    /** Solves the heater; with a {@code bank}, its real C, ESR and ESL replace the tuned capacitor. */
+    static Heated solve(Design d, CoilStage.Analysed coil, Bank bank) {
         if (!(coil.geometry() instanceof SingleLayerSolenoid sol)) {
             throw new AnalysisException("$.primary.shape: the heater models a solenoid work coil around the bar; "
                     + "a " + coil.report().shape() + " work coil is not modelled", false);
@@ -59,7 +68,9 @@ final class HeaterStage {
         WorkCoil wc = new WorkCoil(sol.turns(), sol.turns() * sol.pitch(), coilInner, coil.report().inductance(), rCoil);
         BarGeometry bar = w.innerDiameter() > 0 ? BarGeometry.tube(w.diameter(), w.innerDiameter(), w.length())
                 : BarGeometry.solid(w.diameter(), w.length());
-        Double fixedC = d.compensation().c1();
+        Double fixedC = bank != null ? Double.valueOf(bank.capacitance()) : d.compensation().c1();
+        double esr = bank == null ? 0 : bank.esr();
+        double esl = bank == null ? 0 : bank.esl();
 
         // Cold: the capacitor is tuned (unless fixed) for the loaded coil at the design frequency.
         WorkpieceMedium coldMedium = new WorkpieceMedium.OfMaterial(material, w.temperatureCold());
@@ -69,7 +80,8 @@ final class HeaterStage {
         for (int i = 0; i < ITERATIONS; i++) {
             coldLoad = WorkpieceLoad.inCoil(wc, bar, coldMedium, f, current);
             cold = NetworkStage.tune(NetworkStage.linkDesign(d, f,
-                    LinkValues.tank(coldLoad.loadedInductance(), coldLoad.totalResistance()), fixedC == null ? 0 : fixedC, 0));
+                    LinkValues.tank(coldLoad.loadedInductance(), coldLoad.totalResistance()), fixedC == null ? 0 : fixedC, 0)
+                    .withCapacitorLosses(esr, esl, 0, 0));
             double next = coilCurrent(cold);
             boolean done = Math.abs(next - current) <= CURRENT_TOLERANCE * next;
             current = next;
@@ -89,7 +101,7 @@ final class HeaterStage {
             hotLoad = WorkpieceLoad.inCoil(wc, bar, hotMedium, fh, ih);
             LinkValues hv = LinkValues.tank(hotLoad.loadedInductance(), hotLoad.totalResistance());
             fh = samePhaseFrequency(d, hv, c, cold.design().targetPhase(), fh);
-            hot = NetworkStage.tune(NetworkStage.linkDesign(d, fh, hv, c, 0));
+            hot = NetworkStage.tune(NetworkStage.linkDesign(d, fh, hv, c, 0).withCapacitorLosses(esr, esl, 0, 0));
             double next = coilCurrent(hot);
             boolean done = Math.abs(next - ih) <= CURRENT_TOLERANCE * next;
             ih = next;
