@@ -25,6 +25,7 @@ public final class LatestWins<I, O> implements AutoCloseable {
         }
     }
 
+    private final Function<I, O> preview;
     private final Function<I, O> computation;
     private final Consumer<Outcome<I, O>> publisher;
     private final Runnable onStart;
@@ -38,6 +39,16 @@ public final class LatestWins<I, O> implements AutoCloseable {
      * @param publisher   receives each outcome that is still current, on the event thread
      */
     public LatestWins(Function<I, O> computation, Runnable onStart, Consumer<Outcome<I, O>> publisher) {
+        this(null, computation, onStart, publisher);
+    }
+
+    /**
+     * As {@link #LatestWins(Function, Runnable, Consumer)}, with a quick {@code preview} computed and
+     * published first (when not null), so that an edit shows at once and the full result follows.
+     */
+    public LatestWins(Function<I, O> preview, Function<I, O> computation, Runnable onStart,
+                      Consumer<Outcome<I, O>> publisher) {
+        this.preview = preview;
         this.computation = Objects.requireNonNull(computation);
         this.onStart = Objects.requireNonNull(onStart);
         this.publisher = Objects.requireNonNull(publisher);
@@ -64,13 +75,23 @@ public final class LatestWins<I, O> implements AutoCloseable {
         if (!isCurrent(generation)) {
             return; // superseded before it started
         }
+        if (preview != null) {
+            compute(preview, input, generation);
+            if (!isCurrent(generation)) {
+                return; // superseded while the preview ran
+            }
+        }
+        compute(computation, input, generation);
+    }
+
+    private void compute(Function<I, O> f, I input, long generation) {
         long t0 = System.nanoTime();
         O output = null;
         Throwable failure = null;
         Thread.interrupted(); // start clean: an earlier cancel is not for this request
         running = Thread.currentThread();
         try {
-            output = computation.apply(input);
+            output = f.apply(input);
         } catch (RuntimeException | StackOverflowError e) {
             failure = e;
         } finally {

@@ -20,6 +20,19 @@ import org.tankwright.ui.model.Workspace;
 
 /** The workbench window's entry point, called by {@code tankwright open}. */
 public final class Workbench {
+    /** The interactive pipeline: the operating point first, then the full analysis. */
+    static final org.tankwright.ui.model.Progressive PROGRESSIVE = new org.tankwright.ui.model.Progressive() {
+        @Override
+        public AnalysisResult apply(Design d) {
+            return Analysis.run(d);
+        }
+
+        @Override
+        public AnalysisResult preview(Design d) {
+            return Analysis.run(d, Analysis.Scope.OPERATING_POINT);
+        }
+    };
+
 
     /** Default window size. */
     public static final Dimension DEFAULT_SIZE = new Dimension(1440, 900);
@@ -69,7 +82,7 @@ public final class Workbench {
         onEdt(() -> {
             Theme theme = opts.theme() != null ? opts.theme() : settings.theme();
             theme.install();
-            WorkbenchWindow w = new WorkbenchWindow(settings, Analysis::run, WorkbenchWindow.Mode.INTERACTIVE);
+            WorkbenchWindow w = new WorkbenchWindow(settings, PROGRESSIVE, WorkbenchWindow.Mode.INTERACTIVE);
             w.frame().addWindowListener(new java.awt.event.WindowAdapter() {
                 @Override
                 public void windowClosed(java.awt.event.WindowEvent e) {

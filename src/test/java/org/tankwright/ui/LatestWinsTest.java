@@ -51,6 +51,23 @@ class LatestWinsTest {
     }
 
     @Test
+    void aPreviewIsPublishedBeforeTheFullResult() throws Exception {
+        CountDownLatch done = new CountDownLatch(1);
+        List<Integer> shown = new CopyOnWriteArrayList<>();
+        try (LatestWins<Integer, Integer> lw = new LatestWins<>(i -> -i, i -> i * i, () -> { }, o -> {
+            shown.add(o.output());
+            if (o.output() > 0) {
+                done.countDown();
+            }
+        })) {
+            SwingUtilities.invokeAndWait(() -> lw.submit(7));
+            assertTrue(done.await(5, TimeUnit.SECONDS));
+            SwingUtilities.invokeAndWait(() -> { }); // flush
+            assertEquals(List.of(-7, 49), shown, "the quick preview first, then the full result");
+        }
+    }
+
+    @Test
     void aFailureIsPublishedAsAnOutcome() throws Exception {
         CountDownLatch done = new CountDownLatch(1);
         Throwable[] seen = new Throwable[1];

@@ -64,7 +64,8 @@ public final class Workspace implements AutoCloseable {
         String stem = file != null ? file.getFileName().toString().replaceFirst("\\.json$", "") : design.name();
         OpenDesign d = new OpenDesign(stem + "-" + ProcessHandle.current().pid() + "-" + (++counter), design, file);
         open.add(d);
-        LatestWins<Design, AnalysisResult> engine = new LatestWins<>(analysis, () -> {
+        Function<Design, AnalysisResult> preview = analysis instanceof Progressive p ? p::preview : null;
+        LatestWins<Design, AnalysisResult> engine = new LatestWins<>(preview, analysis, () -> {
             d.computing();
             listeners.forEach(l -> l.computing(d));
         }, outcome -> {
