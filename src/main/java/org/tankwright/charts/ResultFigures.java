@@ -27,7 +27,21 @@ public final class ResultFigures {
 
     /** Every figure of {@code r}, styled with {@code style}. */
     public static List<Figure> all(AnalysisResult r, ChartStyle style) {
-        List<Series> frequency = frequencySweeps(r);
+        return all(r, null, style);
+    }
+
+    /**
+     * Every figure of {@code r}; the frequency sweeps of {@code other} (another design or a saved
+     * variant; may be null) are overlaid for comparison, their curves named after that design.
+     */
+    public static List<Figure> all(AnalysisResult r, AnalysisResult other, ChartStyle style) {
+        List<Series> frequency = new ArrayList<>(frequencySweeps(r));
+        if (other != null) {
+            for (Series s : frequencySweeps(other)) {
+                frequency.add(new Series(s.id() + "-compared", s.title() + " — " + other.design().name(), s.xLabel(),
+                        s.xDim(), s.yLabel(), s.yDim(), s.x(), s.y(), Double.NaN));
+            }
+        }
         double op = r.network() != null ? r.network().frequency() : r.design().frequency();
         List<Figure> out = new ArrayList<>();
         out.add(twoAxes(TITLES.get(0), frequency, s -> s.yDim() == Dimension.RESISTANCE, s -> s.yDim() == Dimension.ANGLE, op, style,

@@ -19,6 +19,10 @@ public final class PlotsPane extends ResultPane {
     private final JTabbedPane tabs = new JTabbedPane(JTabbedPane.TOP, JTabbedPane.SCROLL_TAB_LAYOUT);
     private final List<FigureView> views = new ArrayList<>();
     private final ToleranceTab tolerance;
+    private final javax.swing.JComboBox<Object> compare = new javax.swing.JComboBox<>();
+    private final Workspace workspace;
+    private boolean refilling;
+    private static final String NONE = "(no comparison)";
 
     public PlotsPane(Workspace workspace) {
         super(PaneArrangement.PLOTS, "Plots", "Impedance, power, efficiency, capacitor voltage, coupling, envelope, tolerance",
@@ -31,7 +35,21 @@ public final class PlotsPane extends ResultPane {
         }
         tolerance = new ToleranceTab(() -> workspace.selected() == null ? null : workspace.selected().result());
         tabs.addTab(ResultFigures.TITLES.get(TOLERANCE), tolerance);
-        add(tabs);
+        compare.setName("compareWith");
+        compare.setToolTipText("Overlay another open design's curves on the frequency plots for comparison");
+        compare.addActionListener(e -> {
+            if (!refilling) {
+                showFigures(workspace.selected());
+            }
+        });
+        javax.swing.JPanel bar = new javax.swing.JPanel(new java.awt.FlowLayout(java.awt.FlowLayout.LEFT, 6, 2));
+        bar.add(new javax.swing.JLabel("Compare with:"));
+        bar.add(compare);
+        javax.swing.JPanel content = new javax.swing.JPanel(new java.awt.BorderLayout());
+        content.add(bar, java.awt.BorderLayout.NORTH);
+        content.add(tabs, java.awt.BorderLayout.CENTER);
+        add(content);
+        this.workspace = workspace;
         UIManager.addPropertyChangeListener(e -> {
             if ("lookAndFeel".equals(e.getPropertyName())) {
                 showFigures(workspace.selected());
@@ -58,8 +76,41 @@ public final class PlotsPane extends ResultPane {
     }
 
 
+    /** The other open designs, offered for comparison; the current choice is kept when it is still open. */
+    private OpenDesign comparison(OpenDesign d) {
+        Object chosen = compare.getSelectedItem();
+        refilling = true;
+        try {
+            compare.removeAllItems();
+            compare.addItem(NONE);
+            for (OpenDesign o : workspace.designs()) {
+                if (o != d) {
+                    compare.addItem(new Choice(o));
+                }
+            }
+            for (int i = 0; i < compare.getItemCount(); i++) {
+                if (compare.getItemAt(i) instanceof Choice c && chosen instanceof Choice old && c.design() == old.design()) {
+                    compare.setSelectedIndex(i);
+                }
+            }
+        } finally {
+            refilling = false;
+        }
+        return compare.getSelectedItem() instanceof Choice c ? c.design() : null;
+    }
+
+    /** A design offered in the comparison list, shown by its name. */
+    private record Choice(OpenDesign design) {
+        @Override
+        public String toString() {
+            return design.design().name();
+        }
+    }
+
     private void showFigures(OpenDesign d) {
-        List<Figure> figures = d == null || d.result() == null ? null : ResultFigures.all(d.result(), ChartStyle.fromLookAndFeel());
+        OpenDesign other = d == null ? null : comparison(d);
+        List<Figure> figures = d == null || d.result() == null ? null : ResultFigures.all(d.result(),
+                other == null ? null : other.result(), ChartStyle.fromLookAndFeel());
         for (int i = 0; i < views.size(); i++) {
             String title = ResultFigures.TITLES.get(i);
             views.get(i).show(figures != null ? figures.get(i)
