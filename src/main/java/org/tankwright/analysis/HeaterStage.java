@@ -79,7 +79,7 @@ final class HeaterStage {
         TuningResult cold = null;
         for (int i = 0; i < ITERATIONS; i++) {
             coldLoad = WorkpieceLoad.inCoil(wc, bar, coldMedium, f, current);
-            cold = NetworkStage.tune(NetworkStage.linkDesign(d, f,
+            cold = NetworkStage.tuneTankQuickly(NetworkStage.linkDesign(d, f,
                     LinkValues.tank(coldLoad.loadedInductance(), coldLoad.totalResistance()), fixedC == null ? 0 : fixedC, 0)
                     .withCapacitorLosses(esr, esl, 0, 0));
             double next = coilCurrent(cold);
@@ -89,6 +89,7 @@ final class HeaterStage {
                 break;
             }
         }
+        cold = NetworkStage.tune(cold.design()); // once more with the scan for every zero-phase frequency
         double c = cold.c1();
 
         // Hot: same capacitor; the driver follows the tank's resonance as the load changes.
@@ -101,7 +102,7 @@ final class HeaterStage {
             hotLoad = WorkpieceLoad.inCoil(wc, bar, hotMedium, fh, ih);
             LinkValues hv = LinkValues.tank(hotLoad.loadedInductance(), hotLoad.totalResistance());
             fh = samePhaseFrequency(d, hv, c, cold.design().targetPhase(), fh);
-            hot = NetworkStage.tune(NetworkStage.linkDesign(d, fh, hv, c, 0).withCapacitorLosses(esr, esl, 0, 0));
+            hot = NetworkStage.tuneTankQuickly(NetworkStage.linkDesign(d, fh, hv, c, 0).withCapacitorLosses(esr, esl, 0, 0));
             double next = coilCurrent(hot);
             boolean done = Math.abs(next - ih) <= CURRENT_TOLERANCE * next;
             ih = next;
@@ -109,6 +110,7 @@ final class HeaterStage {
                 break;
             }
         }
+        hot = NetworkStage.tune(hot.design());
         HeaterReport.HeaterPoint coldPoint = point(w.temperatureCold(), coldLoad, cold);
         HeaterReport.HeaterPoint hotPoint = point(w.temperatureHot(), hotLoad, hot);
 
@@ -147,7 +149,8 @@ final class HeaterStage {
      */
     static double samePhaseFrequency(Design d, LinkValues v, double c, double targetDeg, double guess) {
         double f0 = 1 / (2 * Math.PI * Math.sqrt(v.l1() * c));
-        org.tankwright.circuit.PhasorSolver s = NetworkStage.tune(NetworkStage.linkDesign(d, f0, v, c, 0)).newSolver();
+        org.tankwright.circuit.PhasorSolver s = new org.tankwright.circuit.PhasorSolver(
+                org.tankwright.tuning.Tuner.network(NetworkStage.linkDesign(d, f0, v, c, 0), c, 0, 0));
         int src = s.network().sourceIndex();
         double lo = f0 / 3;
         double hi = f0 * 3;

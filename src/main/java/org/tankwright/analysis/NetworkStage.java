@@ -78,6 +78,15 @@ final class NetworkStage {
         return tune(ld, false);
     }
 
+    /** Tunes and solves a single tank without the zero-phase scan (inside iterations). */
+    static TuningResult tuneTankQuickly(LinkDesign ld) {
+        try {
+            return Tuner.tuneTankWithoutScan(ld);
+        } catch (IllegalArgumentException e) {
+            throw new AnalysisException("the network cannot be solved: " + e.getMessage(), false);
+        }
+    }
+
     /** Tunes and solves; {@code thresholds} adds the costly search for the load and coupling at which the link bifurcates. */
     static TuningResult tune(LinkDesign ld, boolean thresholds) {
         try {

@@ -47,7 +47,22 @@ public final class Tuner {
         return Topologies.link(d.topology(), d.coils(), cs1, new CapacitorSpec(c2, d.esr2(), d.esl2()), d.source(), rLoad);
     }
 
+    /**
+     * Tunes and solves a single tank without the scan for every zero-phase frequency: for loops that
+     * re-tune many times (a heater's current and permeability iteration) and only need the last scan.
+     */
+    public static TuningResult tuneTankWithoutScan(LinkDesign d) {
+        if (d.topology().isLink()) {
+            throw new IllegalArgumentException("tuneTankWithoutScan takes a single tank, not " + d.topology());
+        }
+        return tuneTank(d, false);
+    }
+
     private static TuningResult tuneTank(LinkDesign d) {
+        return tuneTank(d, true);
+    }
+
+    private static TuningResult tuneTank(LinkDesign d, boolean scan) {
         double w = 2 * Math.PI * d.frequency();
         double cText = TextbookCompensation.c1(d.topology(), d.coils(), w, 0);
         double c = d.c1() > 0 ? d.c1() : cText;
@@ -64,7 +79,7 @@ public final class Tuner {
             }
         }
         OperatingPoint op = OperatingPoint.of(s, d.topology(), d.source(), d.load(), d.frequency(), d.parts());
-        double[] zpf = Bifurcation.zeroPhaseFrequencies(s, d.frequency());
+        double[] zpf = scan ? Bifurcation.zeroPhaseFrequencies(s, d.frequency()) : new double[0];
         return new TuningResult(d, c, 0, cText, 0, phase, op, zpf, null, null, null, null, notes);
     }
 
