@@ -56,8 +56,7 @@ public final class ToleranceCommand implements Callable<Integer> {
         if (csv != null) {
             StringBuilder sb = new StringBuilder();
             r.writeCsv(sb);
-            byte[] bytes = sb.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8);
-            DesignFiles.writeAtomically(csv, out -> out.write(bytes));
+            DesignFiles.replaceAtomically(csv, sb.toString());
         }
         if (json) {
             CliSupport.printJson(json(r));

@@ -122,8 +122,29 @@ public final class DesignFiles {
         });
     }
 
-    /** Writes what {@code body} produces to {@code file} atomically; on any failure the old file is untouched. */
+    /**
+     * Writes what {@code body} produces to {@code file} atomically, keeping the previous file as
+     * {@code NAME.bak}; on any failure the old file is untouched.
+     */
     public static void writeAtomically(Path file, Body body) throws IOException {
+        write(file, body, true);
+    }
+
+    /**
+     * Writes what {@code body} produces to {@code file} atomically, without a backup (exports and
+     * recovery copies); on any failure the old file is untouched.
+     */
+    public static void replaceAtomically(Path file, Body body) throws IOException {
+        write(file, body, false);
+    }
+
+    /** Writes text as UTF-8, atomically and without a backup. */
+    public static void replaceAtomically(Path file, String text) throws IOException {
+        byte[] bytes = text.getBytes(StandardCharsets.UTF_8);
+        replaceAtomically(file, out -> out.write(bytes));
+    }
+
+    private static void write(Path file, Body body, boolean backup) throws IOException {
         Path abs = file.toAbsolutePath();
         Path dir = abs.getParent();
         Files.createDirectories(dir);
@@ -136,7 +157,7 @@ public final class DesignFiles {
                 ch.force(true);
             }
             keepPermissions(tmp, abs);
-            if (Files.exists(abs)) {
+            if (backup && Files.exists(abs)) {
                 Files.copy(abs, backupOf(abs), StandardCopyOption.REPLACE_EXISTING);
             }
             try {

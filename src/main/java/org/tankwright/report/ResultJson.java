@@ -1,5 +1,7 @@
 package org.tankwright.report;
 
+import org.tankwright.design.DesignFiles;
+
 import com.google.gson.Gson;
 import com.google.gson.GsonBuilder;
 import com.google.gson.JsonArray;
@@ -124,7 +126,7 @@ public final class ResultJson {
 
     /** Writes the JSON text atomically. */
     public static void write(AnalysisResult r, Path file) throws IOException {
-        AtomicFiles.writeText(file, text(r));
+        DesignFiles.replaceAtomically(file, text(r));
     }
 
     /** The key of a numeric component: its name in snake case with its unit's suffix. */

@@ -1,5 +1,7 @@
 package org.tankwright.report;
 
+import org.tankwright.design.DesignFiles;
+
 import org.tankwright.analysis.AnalysisResult;
 import org.tankwright.analysis.Series;
 import org.tankwright.units.Dimension;
@@ -69,7 +71,7 @@ public final class SeriesCsv {
         List<Path> written = new ArrayList<>();
         for (Map.Entry<String, Series> e : all(r).entrySet()) {
             Path file = dir.resolve(e.getKey() + ".csv");
-            AtomicFiles.writeText(file, csv(e.getValue()));
+            DesignFiles.replaceAtomically(file, csv(e.getValue()));
             written.add(file);
         }
         return written;

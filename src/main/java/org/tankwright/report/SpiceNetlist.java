@@ -1,5 +1,7 @@
 package org.tankwright.report;
 
+import org.tankwright.design.DesignFiles;
+
 import org.tankwright.report.TunedNetwork.Kind;
 import org.tankwright.report.TunedNetwork.Part;
 
@@ -62,7 +64,7 @@ public final class SpiceNetlist {
 
     /** Writes the netlist of a result's tuned network, titled with the design's name (atomically). */
     public static void write(AnalysisResult r, Path file) throws IOException {
-        AtomicFiles.writeText(file, write(TunedNetwork.of(r), r.design().name()));
+        DesignFiles.replaceAtomically(file, write(TunedNetwork.of(r), r.design().name()));
     }
 
     /** A value with a SPICE scale letter and up to 6 significant digits: {@code 47N}, {@code 1.5MEG}, {@code 12.5M} (milli). */

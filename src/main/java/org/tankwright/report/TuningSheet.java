@@ -44,9 +44,9 @@ public final class TuningSheet {
 
     /** Writes the sheet for {@code r} to {@code pdf} (atomically: a temporary file, then a move). */
     public static void write(AnalysisResult r, Path pdf, Paper paper, SheetInfo info) throws IOException {
-        AtomicFiles.write(pdf, tmp -> {
+        DesignFiles.replaceAtomically(pdf, out -> {
             try (PDDocument doc = build(r, paper, info)) {
-                doc.save(tmp.toFile());
+                doc.save(out);
             }
         });
     }

@@ -99,6 +99,17 @@ class DesignFilesTest {
     }
 
     @Test
+    void exportsReplaceAtomicallyWithoutABackup(@TempDir Path dir) throws Exception {
+        Path f = dir.resolve("sweep.csv");
+        DesignFiles.replaceAtomically(f, "a,b\n");
+        DesignFiles.replaceAtomically(f, "c,d\n");
+        assertEquals("c,d\n", Files.readString(f));
+        try (var s = Files.list(dir)) {
+            assertEquals(List.of(f), s.toList(), "no backup and no temporary file");
+        }
+    }
+
+    @Test
     void aWriteThatFailsPartWayLeavesTheOldFileIntact(@TempDir Path dir) throws Exception {
         Path f = dir.resolve("pad.json");
         Files.writeString(f, demoText());

@@ -1,7 +1,6 @@
 package org.tankwright.ui.files;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import javax.swing.Timer;
@@ -45,7 +44,7 @@ public final class Autosave implements AutoCloseable {
             var target = recovery.fileFor(d.key());
             writer.execute(() -> {
                 try {
-                    DesignFiles.writeAtomically(target, out -> out.write(DesignFiles.toJson(design).getBytes(StandardCharsets.UTF_8)));
+                    DesignFiles.replaceAtomically(target, DesignFiles.toJson(design));
                 } catch (IOException e) {
                     System.err.println("tankwright: autosave to " + target + " failed: " + e.getMessage());
                 }
