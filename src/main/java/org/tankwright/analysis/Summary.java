@@ -8,6 +8,8 @@ import org.tankwright.design.Token;
 import org.tankwright.units.Dimension;
 import org.tankwright.units.Quantities;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 
 /** A plain-text summary of a result, for terminals (the headless start and {@code tankwright solve}). */
@@ -64,10 +66,20 @@ public final class Summary {
                     .append(", coolant ").append(Quantities.number(h.coolantFlow() * 60000, 3)).append(" L/min\n");
         }
         sb.append("\nStress (rms unless peak)          V rms       V peak      I rms       loss        worst V peak\n");
+        List<String> explained = new ArrayList<>();
         for (ElementStress s : r.stresses()) {
-            sb.append(String.format(Locale.ROOT, "  %-3s %-28s %-11s %-11s %-11s %-11s %s%n", s.id(), trim(s.role(), 28),
+            String role = s.role();
+            int open = role.indexOf(" (");
+            if (open > 0 && role.endsWith(")")) {
+                explained.add("  " + s.id() + ": " + role.substring(open + 2, role.length() - 1));
+                role = role.substring(0, open);
+            }
+            sb.append(String.format(Locale.ROOT, "  %-3s %-28s %-11s %-11s %-11s %-11s %s%n", s.id(), trim(role, 28),
                     q(s.voltageRms(), Dimension.VOLTAGE), q(s.voltagePeak(), Dimension.VOLTAGE), q(s.currentRms(), Dimension.CURRENT),
                     q(s.loss(), Dimension.POWER), q(s.worstVoltagePeak(), Dimension.VOLTAGE)));
+        }
+        for (String e : explained) {
+            sb.append(e).append('\n');
         }
         for (BankReport b : r.banks()) {
             sb.append("  bank ").append(b.id()).append(": ").append(b.seriesCount()).append(" in series × ")

@@ -111,6 +111,6 @@ public record BankComparison(int parts, long searched, long bruteLayouts, Timing
                 }
             }
         }
-        return best.values().stream().sorted(BankSynthesis.ORDER).limit(req.alternatives()).toList();
+        return BankSynthesis.asBuilt(best.values().stream().sorted(BankSynthesis.ORDER).limit(req.alternatives()).toList(), ev);
     }
 }

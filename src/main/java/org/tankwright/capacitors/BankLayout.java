@@ -23,6 +23,33 @@ public record BankLayout(CapacitorPart part, int series, int parallel, Capacitor
         return new BankLayout(part, series, parallel, null, null);
     }
 
+    /**
+     * The same bank written the way a builder reads it: a "trim" of the main part itself is one
+     * more string or one more part in the string (1 × m plus X across = 1 × (m+1)), and with a
+     * single main part the larger contributor is called the main part (across: the larger
+     * capacitance; in series: the smaller one), so the trim is always the small correction.
+     */
+    public BankLayout canonical() {
+        if (trim == null) {
+            return this;
+        }
+        boolean same = trim.id().equals(part.id());
+        if (same && trimPosition == TrimPosition.PARALLEL && series == 1) {
+            return of(part, 1, parallel + 1);
+        }
+        if (same && trimPosition == TrimPosition.SERIES && parallel == 1) {
+            return of(part, series + 1, 1);
+        }
+        if (series == 1 && parallel == 1 && !same) {
+            boolean trimDominates = trimPosition == TrimPosition.PARALLEL
+                    ? trim.capacitance() > part.capacitance() : trim.capacitance() < part.capacitance();
+            if (trimDominates) {
+                return new BankLayout(trim, 1, 1, part, trimPosition);
+            }
+        }
+        return this;
+    }
+
     public int partCount() {
         return series * parallel + (trim == null ? 0 : 1);
     }

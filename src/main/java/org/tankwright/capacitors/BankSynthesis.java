@@ -46,6 +46,33 @@ public final class BankSynthesis {
         return search(request, template.parts(series, low, t * 2.0 * request.maxSeries()));
     }
 
+    /**
+     * The banks found, evaluated in full and written as a builder reads them
+     * ({@link BankLayout#canonical()}: a trim of the main part itself becomes one more string, the
+     * larger of two single parts is the main one), duplicates dropped, sorted. A rewritten layout
+     * is evaluated again and kept only when it is still within its limits (an array of equal parts
+     * carries the parallel-imbalance derating a trim does not).
+     */
+    public static List<CapacitorBank> asBuilt(List<CapacitorBank> found, BankEvaluator eval) {
+        List<CapacitorBank> out = new ArrayList<>();
+        for (CapacitorBank b : found) {
+            CapacitorBank shown = eval.evaluate(b.layout());
+            BankLayout c = b.layout().canonical();
+            if (!c.equals(b.layout())) {
+                CapacitorBank rewritten = eval.evaluate(c);
+                if (rewritten.feasible() || !shown.feasible()) {
+                    shown = rewritten;
+                }
+            }
+            CapacitorBank add = shown;
+            if (out.stream().noneMatch(o -> o.layout().equals(add.layout()))) {
+                out.add(add);
+            }
+        }
+        out.sort(ORDER);
+        return out;
+    }
+
     /** Key that makes banks distinct: part, series, parallel. */
     static String mainKey(BankLayout l) {
         return l.part().id() + "|" + l.series() + "|" + l.parallel();
@@ -93,7 +120,9 @@ public final class BankSynthesis {
                     }
                 }
             }
-            best.replaceAll(b -> eval.evaluate(b.layout()));
+            List<CapacitorBank> shown = asBuilt(best, eval);
+            best.clear();
+            best.addAll(shown);
             misses.replaceAll((k, b) -> eval.evaluate(b.layout()));
             List<String> verdicts = new ArrayList<>();
             for (CapacitorBank b : best) {
