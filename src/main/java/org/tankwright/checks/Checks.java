@@ -44,6 +44,7 @@ public final class Checks {
             new NetworkRules.RemovedReceiver(),
             new NetworkRules.OpenLoadVoltage(),
             new NetworkRules.TargetUnreachable(),
+            new NetworkRules.ReactiveBridgeCurrent(),
             new RadioRules.FrequencyBand(),
             new VoltageRules.AboveExtraLowVoltage(),
             new VoltageRules.MainsWithoutIsolation(),

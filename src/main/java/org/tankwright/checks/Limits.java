@@ -66,6 +66,13 @@ public final class Limits {
     public static final String SRF_SOURCE = "common practice (self-resonance at least " + n(SRF_RATIO) + " × the operating frequency)";
     /** Loaded Q below which the fundamental-harmonic analysis loses accuracy (common practice, about 3). */
     public static final double FHA_MIN_Q = 3.0;
+    /**
+     * Largest |input phase| of a voltage-fed bridge before most of its current is reactive: 60°,
+     * power factor 0.5, the bridge carries twice the current the power needs (common practice).
+     */
+    public static final double REACTIVE_PHASE_DEG = 60.0;
+    /** A deliberately chosen target phase within this of the operating phase is the design's own power control. */
+    public static final double TARGET_PHASE_MATCH_DEG = 5.0;
     /** The source of {@link #FHA_MIN_Q}. */
     public static final String FHA_SOURCE = "common practice (loaded Q of about " + n(FHA_MIN_Q) + " or more)";
     /** Margin to a derated rating below which the checks call it thin, fraction (common practice). */

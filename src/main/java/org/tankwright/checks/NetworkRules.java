@@ -170,4 +170,57 @@ final class NetworkRules {
                             + "power there.");
         }
     }
+
+    /** TW-N07: a voltage-fed bridge far from the tank's zero phase carries mostly reactive current. */
+    static final class ReactiveBridgeCurrent extends BaseRule {
+        ReactiveBridgeCurrent() {
+            super("TW-N07", "reactive bridge current",
+                    "common practice (power factor cos φ at the bridge; above " + Read.num(Limits.REACTIVE_PHASE_DEG, 2)
+                            + "° the bridge carries more than twice the current the power needs)");
+        }
+
+        @Override
+        public void check(AnalysisResult r, List<Finding> out) {
+            NetworkReport n = r.network();
+            Design d = r.design();
+            if (n == null || !Read.voltageFedBridge(d) || !finite(n.inputPhaseDeg())
+                    || Math.abs(n.inputPhaseDeg()) <= Limits.REACTIVE_PHASE_DEG) {
+                return;
+            }
+            Double target = d.compensation() == null ? null : d.compensation().targetPhase();
+            if (target != null && Math.abs(target - n.inputPhaseDeg()) <= Limits.TARGET_PHASE_MATCH_DEG) {
+                return; // the design asks for this phase: power control by frequency offset
+            }
+            double pf = Math.cos(Math.toRadians(n.inputPhaseDeg()));
+            StringBuilder where = new StringBuilder();
+            double nearest = nearestZeroPhase(n);
+            if (finite(nearest)) {
+                where.append(" The tank's input phase is zero at ").append(q(nearest, Dimension.FREQUENCY))
+                        .append(", nearest to the operating ").append(q(n.frequency(), Dimension.FREQUENCY)).append('.');
+            }
+            String retune = finite(n.c1Textbook())
+                    ? " or set C1 near " + q(n.c1Textbook(), Dimension.CAPACITANCE) + " (resonance with the primary at the design frequency)"
+                    : "";
+            add(out, Severity.NOTICE, Math.abs(n.inputPhaseDeg()), Limits.REACTIVE_PHASE_DEG, "°", "$.frequency_Hz",
+                    "The input phase is " + Read.num(n.inputPhaseDeg(), 3) + "°: the bridge supplies "
+                            + q(n.sourceCurrent(), Dimension.CURRENT) + " rms for " + q(n.powerIn(), Dimension.POWER)
+                            + " (power factor " + Read.num(pf, 2) + "), so the switches, the bus capacitors and the wiring carry "
+                            + Read.num(1 / Math.abs(pf), 2) + " × the current the power needs." + where,
+                    "If this offset is not meant as power control, drive nearer the zero-phase frequency (a little on the "
+                            + "inductive side, for zero-voltage switching)" + retune + "; if it is, state it as "
+                            + "compensation.target_phase_deg.");
+        }
+
+        private static double nearestZeroPhase(NetworkReport n) {
+            double best = Double.NaN;
+            if (n.zeroPhaseFrequencies() != null) {
+                for (double f : n.zeroPhaseFrequencies()) {
+                    if (Double.isNaN(best) || Math.abs(f - n.frequency()) < Math.abs(best - n.frequency())) {
+                        best = f;
+                    }
+                }
+            }
+            return best;
+        }
+    }
 }

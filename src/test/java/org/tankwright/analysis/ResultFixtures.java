@@ -78,6 +78,8 @@ public final class ResultFixtures {
         public double loadDc = 35;
         /** Inductive input angle the primary is tuned for, degrees. */
         public double phaseDeg = 12;
+        /** Whether the design file states the target phase (false: the phase follows from fixed parts). */
+        public boolean phaseStated = true;
         public double coss = 150e-12;
         public double deadTime = 200e-9;
         public double turns1 = 16;
@@ -186,7 +188,7 @@ public final class ResultFixtures {
         Coil coil2 = litzSpiral("secondary pad", p.turns2, 2 * p.coilRadius, p.litzStrands, p.strandDiameter);
         Design design = new Design(p.name, "Invented fixture: an SS pad for tests.", DesignKind.LINK, p.frequency,
                 coil1, coil2, new Placement(0.15, 0, 0, null, null),
-                new Compensation(p.topology, null, null, p.phaseDeg),
+                new Compensation(p.topology, null, null, p.phaseStated ? Double.valueOf(p.phaseDeg) : null),
                 new Source(p.sourceKind, null, p.vdc, 1.0, null, p.sourceResistance, p.mainsDerived, p.isolated,
                         p.coss, p.deadTime),
                 new Load(LoadKind.RECTIFIER_CAP, p.loadDc, null, null), null, null, designEnv, null,

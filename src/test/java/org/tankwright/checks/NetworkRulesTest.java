@@ -94,4 +94,28 @@ class NetworkRulesTest {
     void reachableTargetIsQuiet() {
         quiet(ResultFixtures.ssLink(), "TW-N06");
     }
+
+    @Test
+    void mostlyReactiveBridgeCurrentIsANotice() {
+        // Power factor cos 75° = 0.26: the bridge carries 1/0.26 = 3.9 × the current the power needs
+        // (common practice: apparent against real power).
+        ResultFixtures.Link p = new ResultFixtures.Link();
+        p.phaseDeg = 75;
+        p.phaseStated = false;
+        Finding f = fires(p.build(), "TW-N07", "$.frequency_Hz", Severity.NOTICE);
+        assertEquals(75, f.value(), 1e-9);
+        assertTrue(f.message().contains("3.9"), f.message());
+        p.phaseDeg = -75;
+        assertEquals(75, fires(p.build(), "TW-N07", null).value(), 1e-9);
+    }
+
+    @Test
+    void statedPowerControlPhaseOrNearResonanceIsQuiet() {
+        ResultFixtures.Link p = new ResultFixtures.Link();
+        p.phaseDeg = 75;
+        p.phaseStated = true; // the design asks for 75°: its own power control
+        quiet(p.build(), "TW-N07");
+        quiet(ResultFixtures.ssLink(), "TW-N07"); // 12°
+        quiet(ResultFixtures.measuredTank(), "TW-N07"); // a sine source has no bridge
+    }
 }
