@@ -99,7 +99,7 @@ final class MedhurstResistance {
         boolean developed = radiusOverDelta >= MIN_RADIUS_OVER_DELTA;
         boolean wallOk = !(c instanceof Conductor.Tube t) || t.wall() >= 3 * delta;
         String note = String.format(Locale.ROOT, "measured grid length/diameter 0.2–10 (here %.3g), wire diameter/pitch "
-                + "0.1–1 (here %.3g); needs developed skin effect, wire radius ≥ %.0f skin depths (here %.3g)%s",
+                + "0.1–1, below 0.1 toward no proximity effect (here %.3g); needs developed skin effect, wire radius ≥ %.0f skin depths (here %.3g)%s",
                 ld, dp, MIN_RADIUS_OVER_DELTA, radiusOverDelta,
                 c instanceof Conductor.Tube ? "; tube taken as a solid conductor (wall ≥ 3 skin depths)" : "");
         return new ResistanceEstimate(NAME, skinResistance * ratio(ld, dp), SOURCE, inGrid && developed && wallOk, note);
