@@ -15,6 +15,7 @@ import org.tankwright.magnetics.MultilayerSolenoid;
 import org.tankwright.magnetics.OperatingPoint;
 import org.tankwright.magnetics.PolygonSpiral;
 import org.tankwright.magnetics.RectangularSpiral;
+import org.tankwright.magnetics.ResistanceEstimate;
 import org.tankwright.magnetics.SingleLayerSolenoid;
 import org.tankwright.magnetics.SingleLoop;
 import org.tankwright.materials.Conductor;
@@ -266,13 +267,7 @@ public final class CoilCommand implements Callable<Integer> {
         m.put("chosen_model", r.chosenModel());
         List<Map<String, Object>> models = new ArrayList<>();
         for (InductanceEstimate e : r.models()) {
-            Map<String, Object> o = new LinkedHashMap<>();
-            o.put("name", e.name());
-            o.put("inductance_H", e.inductance());
-            o.put("source", e.source());
-            o.put("valid", e.valid());
-            o.put("note", e.note());
-            models.add(o);
+            models.add(modelEntry(e.name(), "inductance_H", e.inductance(), e.source(), e.valid(), e.note()));
         }
         m.put("models", models);
         m.put("model_spread", r.modelSpread());
@@ -283,6 +278,11 @@ public final class CoilCommand implements Callable<Integer> {
         m.put("resistance_ac_skin_ohm", r.resistanceAcSkin());
         m.put("resistance_ac_proximity_ohm", r.resistanceAcProximity());
         m.put("resistance_model", r.resistanceModel());
+        List<Map<String, Object>> rModels = new ArrayList<>();
+        for (ResistanceEstimate e : r.resistanceModels()) {
+            rModels.add(modelEntry(e.name(), "resistance_ac_ohm", e.resistanceAc(), e.source(), e.valid(), e.note()));
+        }
+        m.put("resistance_models", rModels);
         m.put("skin_depth_m", r.skinDepth());
         m.put("q", r.q());
         m.put("self_capacitance_F", r.selfCapacitance());
@@ -311,6 +311,18 @@ public final class CoilCommand implements Callable<Integer> {
         m.put("q_curve", curve);
         m.put("warnings", r.warnings());
         return m;
+    }
+
+    /** One model's entry in a JSON list: {name, VALUE_KEY, source, valid, note}. */
+    private static Map<String, Object> modelEntry(String name, String valueKey, double value, String source,
+            boolean valid, String note) {
+        Map<String, Object> o = new LinkedHashMap<>();
+        o.put("name", name);
+        o.put(valueKey, value);
+        o.put("source", source);
+        o.put("valid", valid);
+        o.put("note", note);
+        return o;
     }
 
     private static void printTable(CoilGeometry g, CoilResult r) {
@@ -344,6 +356,15 @@ public final class CoilCommand implements Callable<Integer> {
         row("current density", Quantities.number(r.currentDensity() * 1e-6, 3) + " A/mm² at "
                 + fmt(r.current(), Dimension.CURRENT) + " rms (AC, skin-weighted: "
                 + Quantities.number(r.currentDensityAc() * 1e-6, 3) + " A/mm²)");
+        System.out.println();
+        System.out.println("AC resistance models (at the frequency):");
+        System.out.printf(Locale.ROOT, "  %-21s %-12s %-6s %s%n", "model", "resistance", "valid", "source");
+        for (ResistanceEstimate e : r.resistanceModels()) {
+            boolean chosen = e.name().equals(CoilModel.OURS);
+            System.out.printf(Locale.ROOT, "  %-21s %-12s %-6s %s%n", e.name() + (chosen ? " *" : ""),
+                    fmt(e.resistanceAc(), Dimension.RESISTANCE), e.valid() ? "yes" : "no", chosen ? "ours (see below)" : e.source());
+            System.out.printf(Locale.ROOT, "  %-21s %-12s %-6s   %s%n", "", "", "", e.note());
+        }
         System.out.println();
         System.out.println("AC resistance: " + r.resistanceModel());
         System.out.println("Self-capacitance: " + r.capacitanceModel());

@@ -179,13 +179,42 @@ public final class CoilModel {
         double lf = inductanceAt(f, t);
         double srf = selfResonance();
         double area = c.metalArea();
-        List<String> warnings = warnings(f, srf, delta, op.current() / (area * rdc / rs));
+        List<ResistanceEstimate> resistanceModels = resistanceModels(f, t);
+        List<String> warnings = warnings(f, srf, delta, op.current() / (area * rdc / rs), resistanceModels);
         return new CoilResult(geometry.kind(), inductance(), chosen.name(), models, spread, lf,
-                apparentInductance(f, t), rdc, rs + rp, rs, rp, resistanceModelText(c), delta,
+                apparentInductance(f, t), rdc, rs + rp, rs, rp, resistanceModelText(c), resistanceModels, delta,
                 2 * Math.PI * f * lf / (rs + rp), selfCapacitance, srf, SelfCapacitance.DESCRIPTION, srf / f,
                 wireLength, c.massPerMetre() * wireLength, op.current() / area,
                 op.current() / (area * rdc / rs), f, t, op.current(), qCurve(f, t, srf), warnings);
     }
+
+    /**
+     * Every AC-resistance model that applies at a frequency: ours ({@value #OURS}, the chosen value:
+     * skin + proximity from the filament field), then Medhurst's measured table for a single-layer solenoid of
+     * round wire or tube (a cross-check, with its own validity verdict).
+     */
+    public List<ResistanceEstimate> resistanceModels(double frequency, double temperature) {
+        double rs = resistanceSkin(frequency, temperature);
+        List<ResistanceEstimate> out = new ArrayList<>(2);
+        out.add(new ResistanceEstimate(OURS, rs + resistanceProximity(frequency, temperature),
+                resistanceModelText(geometry.conductor()), true,
+                "the chosen value; for single-layer solenoids at thin skin depth it is within a few per cent of "
+                        + "Medhurst's measurements for spaced turns (pitch ≥ 2.5 wire diameters), less good for close "
+                        + "turns (docs/models.md)"));
+        if (geometry instanceof SingleLayerSolenoid s) {
+            double delta = WireLoss.skinDepth(geometry.conductor().material().resistivity(temperature), frequency);
+            ResistanceEstimate m = MedhurstResistance.estimate(s, rs, delta);
+            if (m != null) {
+                out.add(m);
+            }
+        }
+        return List.copyOf(out);
+    }
+
+    /** Name of our resistance model in results. */
+    public static final String OURS = "filament-proximity";
+    /** Relative difference between our resistance and a valid cross-check above which a caution is shown. */
+    private static final double RESISTANCE_DISAGREEMENT = 0.2;
 
     /** Q curve on 41 log-spaced points from f/10 to 10 f, stopping below 0.9 f_SR. */
     public List<CoilResult.QPoint> qCurve(double frequency, double temperature, double srf) {
@@ -211,8 +240,20 @@ public final class CoilModel {
         return List.of(points);
     }
 
-    private List<String> warnings(double f, double srf, double delta, double currentDensityAc) {
+    private List<String> warnings(double f, double srf, double delta, double currentDensityAc,
+            List<ResistanceEstimate> resistanceModels) {
         List<String> w = new ArrayList<>();
+        double ours = resistanceModels.get(0).resistanceAc();
+        for (ResistanceEstimate e : resistanceModels.subList(1, resistanceModels.size())) {
+            double gap = e.resistanceAc() / ours - 1;
+            if (e.valid() && Math.abs(gap) > RESISTANCE_DISAGREEMENT) {
+                w.add(String.format(Locale.ROOT, "AC resistance: %s gives %.3g Ω, %+.0f %% from ours (%.3g Ω); the "
+                        + "proximity model takes the field at each wire's centre and neglects its variation across close "
+                        + "turns (pitch under about 2.5 wire diameters), where Medhurst's measurements are the better "
+                        + "guide",
+                        e.name(), e.resistanceAc(), 100 * gap, ours));
+            }
+        }
         if (currentDensityAc > HOT_CURRENT_DENSITY) {
             w.add(String.format(Locale.ROOT, "rms current density %.3g A/mm² (skin-weighted) exceeds %.0f A/mm², a common-"
                     + "practice limit for air-cooled windings (PCB traces and water-cooled tube follow their own rules): "

@@ -18,6 +18,8 @@ import java.util.List;
  * @param resistanceAcSkin      skin-effect part, Ω
  * @param resistanceAcProximity proximity part, Ω
  * @param resistanceModel       how the AC resistance was found (models and sources)
+ * @param resistanceModels      every AC-resistance model that applies, side by side: ours first (the chosen
+ *                              value, {@link #resistanceAc()}), then cross-checks such as Medhurst's table
  * @param skinDepth             skin depth in the conductor metal, m
  * @param q                     ω L_f / R_ac
  * @param selfCapacitance       self-capacitance estimate, F
@@ -37,6 +39,7 @@ import java.util.List;
 public record CoilResult(String kind, double inductance, String chosenModel, List<InductanceEstimate> models,
         double modelSpread, double inductanceAtFrequency, double apparentInductance, double resistanceDc,
         double resistanceAc, double resistanceAcSkin, double resistanceAcProximity, String resistanceModel,
+        List<ResistanceEstimate> resistanceModels,
         double skinDepth, double q, double selfCapacitance, double selfResonance, String capacitanceModel,
         double resonanceMargin, double wireLength, double conductorMass, double currentDensity,
         double currentDensityAc, double frequency, double temperature, double current, List<QPoint> qCurve,

@@ -40,6 +40,16 @@ class CoilCommandTest {
             sawFilament |= m.get("name").getAsString().equals("filament");
         }
         assertTrue(sawWheeler && sawSheet && sawFilament);
+        // AC resistance models side by side: ours (the chosen value) first, then Medhurst's table
+        JsonArray rModels = o.getAsJsonArray("resistance_models");
+        assertEquals(2, rModels.size());
+        JsonObject ours = rModels.get(0).getAsJsonObject();
+        assertEquals("filament-proximity", ours.get("name").getAsString());
+        assertEquals(o.get("resistance_ac_ohm").getAsDouble(), ours.get("resistance_ac_ohm").getAsDouble(), 0);
+        JsonObject med = rModels.get(1).getAsJsonObject();
+        assertEquals("medhurst-table", med.get("name").getAsString());
+        assertTrue(med.has("source") && med.has("valid") && med.has("note"));
+        assertFalse(med.get("valid").getAsBoolean(), "1 mm wire at 100 kHz: skin effect not developed");
         // 20 turns, 50 mm mean diameter, 40 mm long: Nagaoka sheet K_N(1.25) µ0πR²N²/ℓ ≈ 15.7 µH
         assertEquals(15.6e-6, o.get("inductance_H").getAsDouble(), 0.3e-6);
         for (Map.Entry<String, JsonElement> e : o.entrySet()) {
