@@ -302,11 +302,10 @@ public final class PlateLoad {
                     + " less than " + (int) OVERHANG_HEIGHTS + " ring heights (" + Quantities.format(OVERHANG_HEIGHTS * hMax,
                     Dimension.LENGTH, 3) + "): the infinite-plate model overstates the load; the edge heats differently");
         }
-        if (medium instanceof WorkpieceMedium.OfMaterial m && !m.material().temperatureInRange(m.temperatureC())) {
+        String range = medium.rangeWarning();
+        if (range != null) {
             valid = false;
-            notes.add("temperature " + Quantities.format(m.temperatureC(), Dimension.TEMPERATURE, 4) + " lies outside "
-                    + m.material().name() + "'s table or above its upper limit "
-                    + Quantities.format(m.material().upperLimitC(), Dimension.TEMPERATURE, 4));
+            notes.add(range);
         }
         if (medium.fieldDependent()) {
             notes.add("µr from the material's B–H curve at the peak tangential field on the plate surface (under the"
