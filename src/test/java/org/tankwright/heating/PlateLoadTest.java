@@ -164,7 +164,7 @@ class PlateLoadTest {
             assertTrue(err < previousError, f + " Hz: " + err);
             previousError = err;
         }
-        assertTrue(previousError < 1e-4, "at 1 Hz (t = δ/190) within 0.01 %: " + previousError);
+        assertTrue(previousError < 2e-4, "at 1 Hz (t = δ/190) within 0.02 %: " + previousError);
     }
 
     @Test
