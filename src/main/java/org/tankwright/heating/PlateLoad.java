@@ -208,7 +208,7 @@ public final class PlateLoad {
             double a = k[q];
             // α1 = √(a² + j·kk), principal root (real part > 0)
             double x = a * a;
-            double mod = Math.hypot(x, kk);
+            double mod = Math.sqrt(x * x + kk * kk); // no overflow: x ≤ 1e12, kk ≤ 1e20 for any plate and frequency here
             double ar = Math.sqrt(0.5 * (mod + x));
             double ai = kk == 0 ? 0 : kk / (2 * ar);
             // r = (µ a − α1)/(µ a + α1)
@@ -217,13 +217,13 @@ public final class PlateLoad {
             double dd = dr * dr + ai * ai;
             double rr = (nr * dr - ai * ai) / dd;          // (nr − j ai)(dr − j ai)/|dr + j ai|²
             double ri = (-ai * dr - nr * ai) / dd;
-            if (halfSpace) {
+            // e = exp(−2 α1 t); below 1e-17 the slab is a half-space to double precision
+            double mag = halfSpace ? 0 : Math.exp(-2 * ar * thickness);
+            if (mag < 1e-17) {
                 g[2 * q] = rr;
                 g[2 * q + 1] = ri;
                 continue;
             }
-            // e = exp(−2 α1 t)
-            double mag = Math.exp(-2 * ar * thickness);
             double er = mag * Math.cos(-2 * ai * thickness);
             double ei = mag * Math.sin(-2 * ai * thickness);
             // numerator r(1 − e), denominator 1 − r² e
