@@ -16,11 +16,7 @@ import org.tankwright.heating.WorkCoil;
 import org.tankwright.heating.WorkpieceLoad;
 import org.tankwright.heating.WorkpieceMedium;
 import org.tankwright.magnetics.CoilGeometry;
-import org.tankwright.magnetics.Filament;
-import org.tankwright.magnetics.FlatSpiral;
-import org.tankwright.magnetics.Ring;
 import org.tankwright.magnetics.SingleLayerSolenoid;
-import org.tankwright.magnetics.SingleLoop;
 import org.tankwright.materials.WorkpieceMaterial;
 import org.tankwright.materials.WorkpieceMaterials;
 import org.tankwright.tuning.LinkDesign;
@@ -169,7 +165,7 @@ final class HeaterStage {
 
     /** A round bar inside a solenoid work coil (magnetic circuit with the exact bar solution). */
     private static Work bar(CoilStage.Analysed coil, Workpiece w) {
-        if (coil.geometry() instanceof FlatSpiral || coil.geometry() instanceof SingleLoop) {
+        if (coil.geometry() != null && FlatWorkCoil.flat(coil.geometry())) {
             throw new AnalysisException("$.workpiece.shape: a bar is heated inside a solenoid work coil, and this work coil is"
                     + " a flat " + coil.report().shape() + " ($.primary.shape); for a flat coil set $.workpiece.shape to"
                     + " plate (with thickness_m and gap_m)", true);
@@ -194,25 +190,21 @@ final class HeaterStage {
     /** A flat plate below a flat round work coil (coaxial rings over a conducting layer). */
     private static Work plate(Design d, CoilStage.Analysed coil, Workpiece w) {
         CoilGeometry g = coil.geometry();
-        if (!(g instanceof FlatSpiral || g instanceof SingleLoop)) {
+        if (g == null || !FlatWorkCoil.flat(g)) {
             String shape = coil.measured() ? "measured" : coil.report().shape();
-            throw new AnalysisException("$.workpiece.shape: a plate is heated by a flat round work coil above it"
-                    + " ($.primary.shape spiral or loop), and this work coil is a " + shape + "; for a solenoid set"
-                    + " $.workpiece.shape to bar", true);
+            throw new AnalysisException("$.workpiece.shape: a plate is heated by a flat work coil above it"
+                    + " ($.primary.shape spiral, loop or a polygon spiral), and this work coil is a " + shape
+                    + "; for a solenoid set $.workpiece.shape to bar", true);
         }
-        List<Filament> filaments = g.filaments();
-        double[] radii = new double[filaments.size()];
-        double[] lifts = new double[filaments.size()];
-        for (int i = 0; i < radii.length; i++) {
-            Ring ring = (Ring) filaments.get(i);
-            radii[i] = ring.radius();
-            lifts[i] = ring.z() - g.zMin();
-        }
-        FlatWorkCoil fc = new FlatWorkCoil(radii, lifts, g.outerRadius(), coil.report().inductance(),
-                coil.report().resistanceAc());
+        FlatWorkCoil fc = FlatWorkCoil.of(g, coil.report().inductance(), coil.report().resistanceAc());
         PlateGeometry plate = new PlateGeometry(w.diameter(), w.thickness(), w.gap());
         PlateLoad model = PlateLoad.of(fc, plate);
         List<String> notes = new ArrayList<>();
+        if (FlatWorkCoil.equalAreaRings(g)) {
+            notes.add("each polygon turn taken as the ring of equal area for the plate's load (against the polygon's own"
+                    + " image over a good conductor: ΔL within 0.4 % for a square spiral 8 mm above it, 3 % at 2 mm;"
+                    + " hexagons and octagons closer; docs/models.md)");
+        }
         if (d.primary().backing() != null) {
             notes.add("the work coil's backing ($.primary.backing) is not in the plate model: L0 and the plate's"
                     + " load are those of the bare coil");

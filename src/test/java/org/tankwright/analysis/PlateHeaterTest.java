@@ -63,6 +63,25 @@ class PlateHeaterTest {
     }
 
     @Test
+    void squareSpiralOverAPlateUsesEqualAreaRingsAndSaysSo() throws Exception {
+        String text = griddle().replace("\"shape\": \"spiral\",", "\"shape\": \"square-spiral\",");
+        AnalysisResult r = Analysis.run(parse(text));
+        HeaterReport round = Analysis.run(Presets.load("griddle-plate-heater")).heater();
+        assertTrue(r.heater().notes().stream().anyMatch(n -> n.contains("ring of equal area")), r.heater().notes().toString());
+        // a square of the same across-flats size encloses 4/π more area per turn: it couples more to the plate
+        assertTrue(r.heater().cold().workResistance() > round.cold().workResistance());
+    }
+
+    @Test
+    void rectangularSpiralOverAPlateIsRefusedByName() throws Exception {
+        String text = griddle().replace("\"shape\": \"spiral\",", "\"shape\": \"rect-spiral\",")
+                .replace("\"diameter_m\": \"200 mm\",\n    \"inner_diameter_m\": \"50 mm\",",
+                        "\"width_m\": \"300 mm\", \"height_m\": \"250 mm\", \"inner_width_m\": \"100 mm\", \"inner_height_m\": \"50 mm\",");
+        AnalysisException e = assertThrows(AnalysisException.class, () -> Analysis.run(parse(text)));
+        assertTrue(e.getMessage().startsWith("$.workpiece.shape") && e.getMessage().contains("rect-spiral"), e.getMessage());
+    }
+
+    @Test
     void plateAdviceBandEdgesAreTwoAndFourReferenceDepths() {
         // reference depth δ = √(2ρ/(ωµ0µr)) (Jackson §5.18): at the band's lower edge t = 2δ, at the upper t = 4δ
         FrequencyAdvice a = FrequencyAdvice.forPlate(0.006, 1.7e-7, 100, 30e3);
