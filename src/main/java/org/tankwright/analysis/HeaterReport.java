@@ -9,7 +9,8 @@ import java.util.List;
  * @param hot             the operating point with the workpiece hot
  * @param frequencyMin    lowest frequency the driver must reach from cold to hot, Hz
  * @param frequencyMax    highest frequency the driver must reach, Hz
- * @param adviceMin       lower end of the frequency range where the diameter is several reference depths, Hz
+ * @param adviceMin       lower end of the frequency range where the workpiece is several reference depths thick
+ *                        (a bar's diameter, a plate's thickness; see {@code heating.FrequencyAdvice}), Hz
  * @param adviceMax       upper end of that range, Hz
  * @param workpieceMass   kg
  * @param heatingTime     estimated time from cold to hot at the average power, s
@@ -36,7 +37,8 @@ public record HeaterReport(HeaterPoint cold, HeaterPoint hot, double frequencyMi
      * @param coilCurrent      rms work-coil current, A
      * @param capacitorVoltage rms tank capacitor voltage, V
      * @param capacitorCurrent rms tank capacitor current, A
-     * @param surfaceField     rms field strength at the workpiece surface, A/m
+     * @param surfaceField     rms field strength at the workpiece surface, A/m (bar: axial; plate: tangential, under the
+     *                         turn where it peaks)
      */
     public record HeaterPoint(double temperature, double muR, double resistivity, double referenceDepth,
                               double workResistance, double inductance, double resonantFrequency, double power,

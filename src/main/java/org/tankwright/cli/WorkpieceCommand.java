@@ -2,11 +2,16 @@ package org.tankwright.cli;
 
 import org.tankwright.heating.BarGeometry;
 import org.tankwright.heating.BarResponse;
+import org.tankwright.heating.FlatWorkCoil;
 import org.tankwright.heating.FrequencyAdvice;
+import org.tankwright.heating.LoadedPlateCoil;
+import org.tankwright.heating.PlateGeometry;
+import org.tankwright.heating.PlateLoad;
 import org.tankwright.heating.LoadedWorkCoil;
 import org.tankwright.heating.WorkCoil;
 import org.tankwright.heating.WorkpieceLoad;
 import org.tankwright.heating.WorkpieceMedium;
+import org.tankwright.magnetics.InductanceFormulas;
 import org.tankwright.materials.WorkpieceMaterial;
 import org.tankwright.materials.WorkpieceMaterials;
 import org.tankwright.materials.WorkpieceMaterialsJson;
@@ -33,9 +38,15 @@ import java.util.concurrent.Callable;
         description = {"Power a round bar takes from an axial field at one frequency: reference depth, power per metre "
                 + "and in the bar, and its ratio to the thin-skin limit.",
                 "Give the field at the bar's surface (--field), or a coil (--coil-turns, --coil-length, --current; "
-                        + "add --coil-diameter for the finite-coil model with the loaded inductance)."})
+                        + "add --coil-diameter for the finite-coil model with the loaded inductance).",
+                "Plate mode (--plate-thickness): a round plate of --diameter below a flat spiral (--coil-turns, --coil-diameter,"
+                        + " --coil-inner-diameter) at --gap, with --current."})
 public final class WorkpieceCommand implements Callable<Integer> {
     private static final double SQRT2 = Math.sqrt(2.0);
+    private static final String CAUTION = "Caution: an induction-heated workpiece stays hot enough to burn long after it stops"
+            + " glowing; rings, watches and stray metal near the coil heat too; the tank carries high voltage and large "
+            + "circulating current; keep people with implanted medical devices away from the coil. "
+            + "Follow local electrical codes and licensed practice.";
 
     @Option(names = "--diameter", required = true, paramLabel = "D", description = "outer diameter of the bar, e.g. 20mm")
     String diameter;
@@ -64,10 +75,21 @@ public final class WorkpieceCommand implements Callable<Integer> {
     String coilLength;
     @Option(names = "--current", paramLabel = "I", description = "rms coil current")
     String current;
-    @Option(names = "--coil-diameter", paramLabel = "D", description = "work-coil inner diameter: finite-coil model")
+    @Option(names = "--coil-diameter", paramLabel = "D", description = "work-coil inner diameter: finite-coil model (bar); the flat spiral's outer diameter (plate mode)")
     String coilDiameter;
     @Option(names = "--coil-resistance", paramLabel = "R", description = "work-coil resistance (for the efficiency)")
     String coilResistance;
+    @Option(names = "--plate-thickness", paramLabel = "T",
+            description = "plate mode: the workpiece is a plate of this thickness and --diameter below a flat spiral")
+    String plateThickness;
+    @Option(names = "--gap", paramLabel = "G", description = "plate mode: coil conductor face to plate surface")
+    String gap;
+    @Option(names = "--coil-inner-diameter", paramLabel = "D",
+            description = "plate mode: inner diameter of the flat spiral at the conductor's edge (--coil-diameter is its outer)")
+    String coilInnerDiameter;
+    @Option(names = "--coil-conductor", paramLabel = "W",
+            description = "plate mode: conductor width and height (default: the winding close-wound, width/turns)")
+    String coilConductor;
     @Option(names = "--json", description = "print one JSON object with SI values")
     boolean json;
 
@@ -80,6 +102,12 @@ public final class WorkpieceCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (plateThickness != null) {
+            return plate();
+        }
+        if (gap != null || coilInnerDiameter != null || coilConductor != null) {
+            throw usage("--gap, --coil-inner-diameter and --coil-conductor belong to plate mode: add --plate-thickness");
+        }
         double d = CliSupport.quantity("--diameter", diameter, Dimension.LENGTH);
         double c = CliSupport.quantity("--bore", bore, Dimension.LENGTH, 0.0);
         double f = CliSupport.quantity("--frequency", frequency, Dimension.FREQUENCY);
@@ -142,6 +170,112 @@ public final class WorkpieceCommand implements Callable<Integer> {
         return ExitCodes.OK;
     }
 
+    /** Plate mode: a round plate below a flat spiral of evenly spaced turns (the plate model in docs/models.md). */
+    private Integer plate() {
+        if (bore != null || length != null || field != null || coilLength != null) {
+            throw usage("plate mode (--plate-thickness) takes --diameter (the plate's), --gap, --coil-turns, --coil-diameter,"
+                    + " --coil-inner-diameter and --current; --bore, --length, --field and --coil-length are for a bar");
+        }
+        if (gap == null || coilTurns == null || coilDiameter == null || coilInnerDiameter == null || current == null) {
+            throw usage("plate mode needs --gap, --coil-turns, --coil-diameter, --coil-inner-diameter and --current");
+        }
+        double d = CliSupport.quantity("--diameter", diameter, Dimension.LENGTH);
+        double t = CliSupport.quantity("--plate-thickness", plateThickness, Dimension.LENGTH);
+        double g = CliSupport.quantity("--gap", gap, Dimension.LENGTH);
+        double f = CliSupport.quantity("--frequency", frequency, Dimension.FREQUENCY);
+        double nd = CliSupport.quantity("--coil-turns", coilTurns, Dimension.DIMENSIONLESS);
+        double outer = CliSupport.quantity("--coil-diameter", coilDiameter, Dimension.LENGTH);
+        double inner = CliSupport.quantity("--coil-inner-diameter", coilInnerDiameter, Dimension.LENGTH);
+        double i = CliSupport.quantity("--current", current, Dimension.CURRENT);
+        double rc = CliSupport.quantity("--coil-resistance", coilResistance, Dimension.RESISTANCE, 0.0);
+        if (!(nd >= 1 && nd == Math.rint(nd) && nd <= 10000)) {
+            throw new ExitCodes.UserError(ExitCodes.INVALID_INPUT, "--coil-turns " + coilTurns + ": a whole number from 1 to 10000");
+        }
+        int n = (int) nd;
+        if (!(inner > 0 && outer > inner)) {
+            throw new ExitCodes.UserError(ExitCodes.INVALID_INPUT, "--coil-inner-diameter " + coilInnerDiameter
+                    + ": must be above zero and below --coil-diameter (" + coilDiameter + ")");
+        }
+        double width = 0.5 * (outer - inner);
+        double w = CliSupport.quantity("--coil-conductor", coilConductor, Dimension.LENGTH, width / n);
+        if (!(w > 0 && w * n <= width * (1 + 1e-9))) {
+            throw new ExitCodes.UserError(ExitCodes.INVALID_INPUT, "--coil-conductor " + coilConductor + ": " + n
+                    + " turns of it must fit in the winding's radial width " + Quantities.format(width, Dimension.LENGTH, 3));
+        }
+        Medium m = medium();
+        double pitch = n > 1 ? (width - w) / (n - 1) : 0;
+        double[] radii = new double[n];
+        double[] lifts = new double[n];
+        for (int k = 0; k < n; k++) {
+            radii[k] = 0.5 * outer - 0.5 * w - k * pitch;
+            lifts[k] = 0.5 * w;
+        }
+        double l0 = InductanceFormulas.wheelerFlatSpiral(0.25 * (outer + inner), width, n);
+        LoadedPlateCoil r;
+        try {
+            FlatWorkCoil coil = new FlatWorkCoil(radii, lifts, 0.5 * outer, l0, rc);
+            r = PlateLoad.onPlate(coil, new PlateGeometry(d, t, g), m.medium, f, i);
+        } catch (IllegalArgumentException e) {
+            throw new ExitCodes.UserError(ExitCodes.INVALID_INPUT, e.getMessage());
+        }
+        FrequencyAdvice advice = FrequencyAdvice.forPlate(t, r.resistivity(), r.muR(), f);
+        Map<String, Object> out = new LinkedHashMap<>();
+        out.put("field_model", "plate below a flat spiral: coaxial rings over a conducting layer");
+        out.put("reference_depth_m", r.referenceDepth());
+        out.put("thickness_over_depth", r.thicknessOverDepth());
+        out.put("power_W", r.workPower());
+        out.put("frequency_Hz", f);
+        out.put("surface_field_A_per_m", r.surfaceField());
+        out.put("mu_r", r.muR());
+        out.put("resistivity_ohm_m", r.resistivity());
+        putMaterial(out, m);
+        out.put("empty_inductance_H", r.emptyInductance());
+        out.put("loaded_inductance_H", r.loadedInductance());
+        out.put("inductance_change_H", r.inductanceChange());
+        out.put("work_resistance_ohm", r.workResistance());
+        out.put("coil_resistance_ohm", rc);
+        out.put("frequency_advice", advice(advice, "thickness_over_depth", "plate thickness " + FrequencyAdvice.PLATE_LOW_RATIO
+                + " to " + FrequencyAdvice.PLATE_HIGH_RATIO + " reference depths (ours)"));
+        out.put("model", r.provenance().model());
+        out.put("source", r.provenance().source());
+        out.put("valid", r.provenance().valid());
+        List<String> notes = new ArrayList<>(r.provenance().notes());
+        notes.add("empty inductance from Wheeler's flat-spiral formula (about 5 %); the rings lie"
+                + " " + Quantities.format(0.5 * w, Dimension.LENGTH, 3) + " above the conductor's face");
+        out.put("notes", notes);
+        if (json) {
+            CliSupport.printJson(out);
+            return ExitCodes.OK;
+        }
+        PrintStream o = System.out;
+        if (m.material != null) {
+            o.println("Workpiece        " + m.material.name() + " plate at " + Quantities.format(m.temperatureC,
+                    Dimension.TEMPERATURE, 4) + (m.material.magneticAt(m.temperatureC) ? " (magnetic)" : " (non-magnetic)"));
+        }
+        o.println("Resistivity      " + Quantities.format(r.resistivity(), Dimension.RESISTIVITY, 3));
+        o.println("µr used          " + Quantities.number(r.muR(), 3));
+        o.println("Surface field    " + Quantities.format(r.surfaceField(), Dimension.FIELD_STRENGTH, 3)
+                + " rms (tangential, under the turn where it peaks)");
+        o.println("Reference depth  " + Quantities.format(r.referenceDepth(), Dimension.LENGTH, 3)
+                + "   (thickness/δ = " + Quantities.number(r.thicknessOverDepth(), 3) + ")");
+        o.println("Power in plate   " + Quantities.format(r.workPower(), Dimension.POWER, 4));
+        o.println("Work resistance  " + Quantities.format(r.workResistance(), Dimension.RESISTANCE, 4));
+        o.println("Coil L empty     " + Quantities.format(r.emptyInductance(), Dimension.INDUCTANCE, 4) + "  (Wheeler)");
+        o.println("Coil L loaded    " + Quantities.format(r.loadedInductance(), Dimension.INDUCTANCE, 4)
+                + "  (change " + Quantities.format(r.inductanceChange(), Dimension.INDUCTANCE, 3) + ")");
+        o.println("Frequency advice " + Quantities.format(advice.lowFrequency(), Dimension.FREQUENCY, 3) + " … "
+                + Quantities.format(advice.highFrequency(), Dimension.FREQUENCY, 3) + " for thickness 2–4 δ; chosen "
+                + Quantities.format(f, Dimension.FREQUENCY, 3) + ": "
+                + advice.verdict().name().toLowerCase(java.util.Locale.ROOT).replace('_', ' '));
+        o.println("Model            " + r.provenance().model() + " (" + r.provenance().verdict() + ")");
+        for (String note : notes) {
+            o.println("  note: " + note);
+        }
+        o.println();
+        o.println(CAUTION);
+        return ExitCodes.OK;
+    }
+
     private record Medium(WorkpieceMedium medium, WorkpieceMaterial material, double temperatureC) {
     }
 
@@ -194,14 +328,7 @@ public final class WorkpieceCommand implements Callable<Integer> {
         out.put("mu_r", r.muR());
         out.put("resistivity_ohm_m", r.resistivity());
         out.put("radius_over_depth", r.radiusOverDepth());
-        if (m.material != null) {
-            out.put("material", m.material.name());
-            out.put("temperature_degC", m.temperatureC);
-            out.put("magnetic", m.material.magneticAt(m.temperatureC));
-            if (m.material.magnetization() != null) {
-                out.put("curie_point_degC", m.material.curiePointC());
-            }
-        }
+        putMaterial(out, m);
         if (loaded != null) {
             out.put("empty_inductance_H", loaded.emptyInductance());
             out.put("loaded_inductance_H", loaded.loadedInductance());
@@ -211,20 +338,37 @@ public final class WorkpieceCommand implements Callable<Integer> {
             out.put("coil_efficiency", loaded.efficiency());
             out.put("coil_voltage_V", loaded.coilVoltage());
         }
-        Map<String, Object> adv = new LinkedHashMap<>();
-        adv.put("low_frequency_Hz", advice.lowFrequency());
-        adv.put("high_frequency_Hz", advice.highFrequency());
-        adv.put("diameter_over_depth", advice.diameterOverDepth());
-        adv.put("verdict", advice.verdict().name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'));
-        adv.put("rule", "diameter " + FrequencyAdvice.LOW_RATIO + " to " + FrequencyAdvice.HIGH_RATIO
-                + " reference depths (common practice)");
-        out.put("frequency_advice", adv);
+        out.put("frequency_advice", advice(advice, "diameter_over_depth", "diameter " + FrequencyAdvice.LOW_RATIO + " to "
+                + FrequencyAdvice.HIGH_RATIO + " reference depths (common practice)"));
         out.put("model", r.provenance().model());
         out.put("source", r.provenance().source());
         out.put("valid", loaded == null ? r.provenance().valid() : loaded.provenance().valid());
         List<String> all = new ArrayList<>(r.provenance().notes());
         all.addAll(notes);
         out.put("notes", all);
+    }
+
+    /** The material's name, temperature, whether it is magnetic there and its Curie point, when a material is used. */
+    private static void putMaterial(Map<String, Object> out, Medium m) {
+        if (m.material != null) {
+            out.put("material", m.material.name());
+            out.put("temperature_degC", m.temperatureC);
+            out.put("magnetic", m.material.magneticAt(m.temperatureC));
+            if (m.material.magnetization() != null) {
+                out.put("curie_point_degC", m.material.curiePointC());
+            }
+        }
+    }
+
+    /** The frequency advice as a JSON object: band edges, size over depth under {@code ratioKey}, verdict, rule. */
+    private static Map<String, Object> advice(FrequencyAdvice advice, String ratioKey, String rule) {
+        Map<String, Object> adv = new LinkedHashMap<>();
+        adv.put("low_frequency_Hz", advice.lowFrequency());
+        adv.put("high_frequency_Hz", advice.highFrequency());
+        adv.put(ratioKey, advice.diameterOverDepth());
+        adv.put("verdict", advice.verdict().name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'));
+        adv.put("rule", rule);
+        return adv;
     }
 
     private static void print(PrintStream o, Medium m, BarResponse r, Double heated, LoadedWorkCoil loaded,
@@ -272,9 +416,6 @@ public final class WorkpieceCommand implements Callable<Integer> {
             o.println("  note: " + n);
         }
         o.println();
-        o.println("Caution: an induction-heated workpiece stays hot enough to burn long after it stops glowing; "
-                + "rings, watches and stray metal near the coil heat too; the tank carries high voltage and large "
-                + "circulating current; keep people with implanted medical devices away from the coil. "
-                + "Follow local electrical codes and licensed practice.");
+        o.println(CAUTION);
     }
 }

@@ -21,7 +21,7 @@ public record Design(
         @Field(required = true, doc = "the compensation topology and capacitors") Compensation compensation,
         @Field(required = true, doc = "what drives the primary") Source source,
         @Field(doc = "what the secondary feeds (links)") Load load,
-        @Field(doc = "the heated bar (heaters)") Workpiece workpiece,
+        @Field(doc = "the heated bar or plate (heaters)") Workpiece workpiece,
         @Field(doc = "how capacitor banks are chosen") CapacitorSettings capacitors,
         @Field(doc = "the operating envelope") Envelope envelope,
         @Field(doc = "the tolerance study") Tolerances tolerances,

@@ -43,6 +43,9 @@ public final class Enums {
         }
     }
 
+    /** A heater's workpiece: a round bar inside a solenoid work coil, or a flat plate (disc) below a flat spiral. */
+    public enum WorkpieceShape { BAR, PLATE }
+
     /** Sources, described by their fundamental. */
     public enum SourceKind { SINE, FULL_BRIDGE, HALF_BRIDGE, CURRENT }
 

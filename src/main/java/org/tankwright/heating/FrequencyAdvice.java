@@ -27,6 +27,11 @@ public record FrequencyAdvice(double diameter, double resistivity, double muR, d
     /** Upper edge of the band for through-heating, d/δ (common practice). */
     public static final double HIGH_RATIO = 8.0;
 
+    /** Lower edge of the plate band, t/δ: below it the slab reflection's e^{−2t/δ} lets a noticeable share of the field through. */
+    public static final double PLATE_LOW_RATIO = 2.0;
+    /** Upper edge of the plate band, t/δ: the bar band's radius/δ (4 … 8 diameters), since a plate is heated from one face. */
+    public static final double PLATE_HIGH_RATIO = 4.0;
+
     /** Where the chosen frequency stands. */
     public enum Verdict {
         /** d/δ below the band: little power per ampere, poor coil efficiency. */
@@ -40,13 +45,32 @@ public record FrequencyAdvice(double diameter, double resistivity, double muR, d
     /** Advice for a bar of diameter d (m) at resistivity ρ (Ω·m), µr and the chosen frequency (Hz). */
     public static FrequencyAdvice forBar(double diameter, double resistivity, double muR, double chosenFrequency) {
         HeatingInputs.positive("workpiece diameter", diameter, "m");
-        double low = ReferenceDepth.frequencyFor(resistivity, muR, diameter / LOW_RATIO);
-        double high = ReferenceDepth.frequencyFor(resistivity, muR, diameter / HIGH_RATIO);
-        double ratio = diameter / ReferenceDepth.of(resistivity, chosenFrequency, muR);
-        Verdict v = ratio < LOW_RATIO ? Verdict.BELOW_BAND : ratio > HIGH_RATIO ? Verdict.ABOVE_BAND : Verdict.IN_BAND;
-        return new FrequencyAdvice(diameter, resistivity, muR, low, high, chosenFrequency, ratio, v,
+        return band(diameter, resistivity, muR, chosenFrequency, LOW_RATIO, HIGH_RATIO,
                 new Provenance("diameter of several reference depths", "common practice", true,
                         List.of("band d/δ = " + LOW_RATIO + " … " + HIGH_RATIO + " for through-heating")));
+    }
+
+    /** Where the chosen frequency puts size/δ against the band [low, high] of size/δ. */
+    private static FrequencyAdvice band(double size, double resistivity, double muR, double chosenFrequency, double lowRatio,
+                                        double highRatio, Provenance provenance) {
+        double low = ReferenceDepth.frequencyFor(resistivity, muR, size / lowRatio);
+        double high = ReferenceDepth.frequencyFor(resistivity, muR, size / highRatio);
+        double ratio = size / ReferenceDepth.of(resistivity, chosenFrequency, muR);
+        Verdict v = ratio < lowRatio ? Verdict.BELOW_BAND : ratio > highRatio ? Verdict.ABOVE_BAND : Verdict.IN_BAND;
+        return new FrequencyAdvice(size, resistivity, muR, low, high, chosenFrequency, ratio, v, provenance);
+    }
+
+    /**
+     * Advice for a plate of thickness t (m) heated from one face: thickness from {@value #PLATE_LOW_RATIO} to
+     * {@value #PLATE_HIGH_RATIO} reference depths (ours, by analogy with the bar band). The record's
+     * {@code diameter} and {@code diameterOverDepth} then hold the thickness and t/δ.
+     */
+    public static FrequencyAdvice forPlate(double thickness, double resistivity, double muR, double chosenFrequency) {
+        HeatingInputs.positive("plate thickness", thickness, "m");
+        return band(thickness, resistivity, muR, chosenFrequency, PLATE_LOW_RATIO, PLATE_HIGH_RATIO,
+                new Provenance("plate thickness of a few reference depths", "ours: slab transmission e^{−2t/δ} for the lower"
+                        + " edge, the bar band's radius for the upper", true,
+                        List.of("band t/δ = " + PLATE_LOW_RATIO + " … " + PLATE_HIGH_RATIO + " for a plate heated from one face")));
     }
 
     /** Advice at an operating point (its resistivity, µr and resonant frequency). */

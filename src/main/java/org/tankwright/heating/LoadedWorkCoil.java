@@ -18,7 +18,7 @@ package org.tankwright.heating;
  */
 public record LoadedWorkCoil(double frequency, double coilCurrent, double emptyInductance, double loadedInductance,
                              double workResistance, double coilResistance, double surfaceField, double heatedLength,
-                             BarResponse bar, int muIterations, Provenance provenance) {
+                             BarResponse bar, int muIterations, Provenance provenance) implements CoilLoad {
 
     /** L − L0, H: negative when the workpiece's eddy currents push flux out, positive when its µr pulls flux in. */
     public double inductanceChange() {

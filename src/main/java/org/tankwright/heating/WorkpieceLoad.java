@@ -104,11 +104,10 @@ public final class WorkpieceLoad {
             notes.add("only the " + Quantities.format(inside, Dimension.LENGTH, 3) + " of workpiece inside the coil is"
                     + " counted; the part outside is not heated in this model");
         }
-        if (medium instanceof WorkpieceMedium.OfMaterial m && !m.material().temperatureInRange(m.temperatureC())) {
+        String range = medium.rangeWarning();
+        if (range != null) {
             valid = false;
-            notes.add("temperature " + Quantities.format(m.temperatureC(), Dimension.TEMPERATURE, 4) + " lies outside "
-                    + m.material().name() + "'s table or above its upper limit "
-                    + Quantities.format(m.material().upperLimitC(), Dimension.TEMPERATURE, 4));
+            notes.add(range);
         }
         if (medium.fieldDependent()) {
             notes.add("µr from the material's B–H curve at the peak surface field; the saturated skin layer is"

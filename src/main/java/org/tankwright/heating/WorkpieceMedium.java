@@ -1,6 +1,8 @@
 package org.tankwright.heating;
 
 import org.tankwright.materials.WorkpieceMaterial;
+import org.tankwright.units.Dimension;
+import org.tankwright.units.Quantities;
 
 /** What a workpiece is made of, as the field model needs it: a resistivity and a µr(H) rule. */
 public sealed interface WorkpieceMedium {
@@ -16,6 +18,16 @@ public sealed interface WorkpieceMedium {
 
     /** One line for people: the material and temperature, or the fixed values. */
     String describe();
+
+    /** Why the temperature lies outside the material's tables, or null when it does not (or nothing is tabulated). */
+    default String rangeWarning() {
+        if (this instanceof OfMaterial m && !m.material().temperatureInRange(m.temperatureC())) {
+            return "temperature " + Quantities.format(m.temperatureC(), Dimension.TEMPERATURE, 4) + " lies outside "
+                    + m.material().name() + "'s table or above its upper limit "
+                    + Quantities.format(m.material().upperLimitC(), Dimension.TEMPERATURE, 4);
+        }
+        return null;
+    }
 
     /** A material from the table at a uniform temperature. */
     record OfMaterial(WorkpieceMaterial material, double temperatureC) implements WorkpieceMedium {

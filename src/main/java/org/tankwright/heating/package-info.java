@@ -3,7 +3,8 @@
  * exact eddy-current power of a solid or hollow round bar in an axial field (Bessel functions of
  * complex argument); the bar inside a finite work coil with a gap (magnetic-circuit approximation),
  * giving the loaded coil's series resistance and inductance, power and coil efficiency with µr(H)
- * iterated on the surface field; cold and hot operating points with a tank capacitor; heating time,
+ * iterated on the surface field; a flat plate below a flat spiral work coil (coaxial rings over a
+ * conducting layer, Dodd &amp; Deeds' integral); cold and hot operating points with a tank capacitor; heating time,
  * coolant flow and frequency advice. Values in, immutable records out, each with its provenance.
  * Engine: no user-interface imports.
  */

@@ -380,7 +380,7 @@ final class BuildSections {
         Table more = new Table(new String[] {"Heater", "Value"}, new float[] {3f, 3f}, false, true);
         more.row("Driver frequency range, cold to hot", Fmt.build(h.frequencyMin(), Dimension.FREQUENCY) + " to "
                 + Fmt.build(h.frequencyMax(), Dimension.FREQUENCY));
-        more.row("Frequencies where the bar is several reference depths thick", Fmt.reading(h.adviceMin(), Dimension.FREQUENCY)
+        more.row("Frequencies where the workpiece is several reference depths thick", Fmt.reading(h.adviceMin(), Dimension.FREQUENCY)
                 + " to " + Fmt.reading(h.adviceMax(), Dimension.FREQUENCY));
         more.row("Workpiece mass", Fmt.reading(h.workpieceMass(), Dimension.MASS));
         more.row("Heating time, cold to hot (estimate)", Fmt.reading(h.heatingTime(), Dimension.TIME));

@@ -115,6 +115,38 @@ class PresetPipelineTest {
         assertEquals(expected, bolt.hot().resonantFrequency(), 0.01 * expected, "zero-phase frequency of the hot tank");
     }
 
+    /**
+     * The griddle's carbon-steel plate stays below its Curie point (iron 770 °C, CRC Handbook) at 250 °C, so it is
+     * magnetic at both points; its resistivity rises with temperature (the materials table). With the plate many
+     * reference depths thick the work resistance grows with the surface resistance ρ/δ = √(πfµ0µrρ) (thin-skin limit,
+     * Jackson §8.1), and the longer reference depth lets the eddy currents screen less flux, so the loaded inductance
+     * rises; both stay below the empty coil's, since a thick conducting plate mostly mirrors the coil with reversed
+     * current (image method).
+     */
+    @Test
+    void plateHeaterFollowsTheWarmingPlate() {
+        AnalysisResult r = RESULTS.get("griddle-plate-heater");
+        HeaterReport h = r.heater();
+        double l0 = r.coils().get(0).inductance();
+        assertTrue(h.cold().muR() > 5 && h.hot().muR() > 5, "steel below Curie is magnetic: " + h.cold().muR() + ", " + h.hot().muR());
+        assertTrue(h.hot().resistivity() > 1.5 * h.cold().resistivity());
+        assertTrue(h.hot().referenceDepth() > h.cold().referenceDepth());
+        assertTrue(h.hot().workResistance() > h.cold().workResistance(), "R_work rises with ρ/δ");
+        assertTrue(h.cold().inductance() < h.hot().inductance() && h.hot().inductance() < l0,
+                h.cold().inductance() + " < " + h.hot().inductance() + " < " + l0);
+        assertTrue(h.frequencyMin() <= Math.min(h.cold().resonantFrequency(), h.hot().resonantFrequency()));
+        assertTrue(h.frequencyMax() >= Math.max(h.cold().resonantFrequency(), h.hot().resonantFrequency()));
+        // power into the plate is R_work·I² at each point (definition of the reflected resistance)
+        assertEquals(h.cold().workResistance() * h.cold().coilCurrent() * h.cold().coilCurrent(), h.cold().power(),
+                1e-9 * h.cold().power());
+        // an invented 2 kW griddle: a few hundred W to about 2 kW into the plate
+        assertTrue(h.cold().power() > 300 && h.cold().power() < 2500, "cold power " + h.cold().power());
+        assertTrue(h.hot().power() > 300 && h.hot().power() < 2500, "hot power " + h.hot().power());
+        // mass of the 300 mm × 6 mm disc at steel's density (7850 kg/m³, handbook value, from memory)
+        assertEquals(Math.PI * 0.15 * 0.15 * 0.006 * 7850, h.workpieceMass(), 0.02 * h.workpieceMass());
+        assertTrue(Double.isFinite(h.heatingTime()) && h.heatingTime() > 0);
+    }
+
     /** The contract of issue 5: `solve --json` carries the operating point under the keys of `tune --json`. */
     @Test
     void solveJsonHasTheTuneKeys() {

@@ -287,7 +287,7 @@ public final class ResultFixtures {
         Design design = new Design(p.name, "Invented fixture: a bar heater for tests.", DesignKind.HEATER, f, coil, null,
                 null, new Compensation(Topology.PARALLEL, p.capacitance, null, null),
                 new Source(p.sourceKind, null, p.vdc, 1.0, sourceCurrent, 0, p.mainsDerived, p.isolated, null, null),
-                null, new Workpiece("carbon-steel", p.barDiameter, 0, p.barLength, p.temperatureCold,
+                null, Workpiece.bar("carbon-steel", p.barDiameter, 0, p.barLength, p.temperatureCold,
                         p.temperatureHot, 0.2, p.coolantRise),
                 null, null, null, new Safety(p.fieldDistance, p.exposureSet, p.population));
         double area = Math.PI * (sq(p.tubeDiameter / 2) - sq(p.tubeDiameter / 2 - p.tubeWall));

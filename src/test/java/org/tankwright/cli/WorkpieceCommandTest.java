@@ -6,6 +6,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tankwright.heating.AxialFieldBar;
 import org.tankwright.heating.ReferenceDepth;
+import org.tankwright.magnetics.MutualKernels;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -63,6 +64,48 @@ class WorkpieceCommandTest {
         double rw = o.get("work_resistance_ohm").getAsDouble();
         assertEquals(rw / (rw + 0.008), o.get("coil_efficiency").getAsDouble(), 1e-12);
         assertEquals(rw * 250 * 250, o.get("power_W").getAsDouble(), 1e-9 * rw * 250 * 250);
+    }
+
+    @Test
+    void plateModeNearlyMirrorsTheCoilInAThickGoodConductor() {
+        // one turn (ring radius 49 mm, 1 mm above its face, 4 mm gap) over 10 mm of copper at 10 MHz (δ = 21 µm):
+        // ΔL → −M(ring, mirror image 10 mm below) by Maxwell's coaxial-ring formula (image method)
+        JsonObject o = json("workpiece", "--plate-thickness", "10mm", "--diameter", "300mm", "--gap", "4mm",
+                "--resistivity", "1.7e-8", "--mu-r", "1", "--frequency", "10M", "--coil-turns", "1",
+                "--coil-diameter", "100mm", "--coil-inner-diameter", "96mm", "--current", "10", "--json");
+        double image = MutualKernels.coaxialRings(0.049, 0.049, 0.010);
+        assertEquals(-image, o.get("inductance_change_H").getAsDouble(), 0.02 * image);
+        double rw = o.get("work_resistance_ohm").getAsDouble();
+        assertTrue(rw > 0);
+        assertEquals(rw * 100, o.get("power_W").getAsDouble(), 1e-9 * rw * 100);
+        assertTrue(o.get("valid").getAsBoolean());
+        assertEquals("above-band", o.getAsJsonObject("frequency_advice").get("verdict").getAsString());
+    }
+
+    @Test
+    void plateModeRefusesBarOptionsAndNamesWhatIsMissing() {
+        int[] st = new int[1];
+        String[] out = ValidateCommandTest.run(st, "workpiece", "--plate-thickness", "6mm", "--diameter", "300mm",
+                "--material", "carbon-steel", "--frequency", "30k", "--coil-turns", "20", "--coil-diameter", "200mm",
+                "--coil-inner-diameter", "50mm", "--current", "40");
+        assertEquals(ExitCodes.USAGE, st[0]);
+        assertTrue(out[1].contains("--gap"), out[1]);
+        out = ValidateCommandTest.run(st, "workpiece", "--plate-thickness", "6mm", "--diameter", "300mm", "--length", "50mm",
+                "--gap", "12mm", "--material", "carbon-steel", "--frequency", "30k", "--coil-turns", "20",
+                "--coil-diameter", "200mm", "--coil-inner-diameter", "50mm", "--current", "40");
+        assertEquals(ExitCodes.USAGE, st[0]);
+        assertTrue(out[1].contains("--length"), out[1]);
+        out = ValidateCommandTest.run(st, "workpiece", "--plate-thickness", "6mm", "--diameter", "300mm", "--gap", "12mm",
+                "--material", "carbon-steel", "--frequency", "30k", "--coil-turns", "20", "--coil-diameter", "200mm",
+                "--coil-inner-diameter", "250mm", "--current", "40");
+        assertEquals(ExitCodes.INVALID_INPUT, st[0]);
+        assertTrue(out[1].contains("--coil-inner-diameter 250mm"), out[1]);
+        assertFalse(out[1].contains("Exception"), out[1]);
+        out = ValidateCommandTest.run(st, "workpiece", "--plate-thickness", "6mm", "--diameter", "300mm", "--gap", "12mm",
+                "--material", "carbon-steel", "--frequency", "30k", "--coil-turns", "20", "--coil-diameter", "200mm",
+                "--coil-inner-diameter", "50mm", "--current", "40");
+        assertEquals(ExitCodes.OK, st[0], out[1]);
+        assertTrue(out[0].contains("Power in plate") && out[0].contains("licensed practice"), out[0]);
     }
 
     @Test

@@ -27,6 +27,15 @@ public final class Sketches {
         double offX = p != null ? p.offsetX() : 0;
         double offY = p != null ? p.offsetY() : 0;
         CoilSketch.Coil primary = coil(d.primary(), 0, 0, 0, true);
+        Workpiece w = d.workpiece();
+        if (primary != null && w != null && w.isPlate() && primary.backing() == null && w.diameter() != null
+                && w.thickness() != null && w.gap() != null) {
+            // a heater's plate sits below its flat coil: drawn where a backing plate would be
+            CoilSketch.Coil c = primary;
+            primary = new CoilSketch.Coil(c.label(), c.winding(), c.sides(), c.aspect(), c.innerAspect(), c.innerRadius(),
+                    c.outerRadius(), c.turns(), c.layers(), c.wireDiameter(), c.length(), c.x(), c.y(), c.z(), true,
+                    new CoilSketch.Plate(w.diameter() / 2, w.thickness(), w.gap(), false));
+        }
         if (primary != null) {
             coils.add(primary);
         }
@@ -40,8 +49,7 @@ public final class Sketches {
         if (coils.isEmpty()) {
             return new Outcome(null, "Measured coils have no geometry to draw");
         }
-        Workpiece w = d.workpiece();
-        CoilSketch.Bar bar = w == null ? null : new CoilSketch.Bar(w.diameter() / 2, w.innerDiameter() / 2, w.length());
+        CoilSketch.Bar bar = w == null || w.isPlate() || w.length() == null ? null : new CoilSketch.Bar(w.diameter() / 2, w.innerDiameter() / 2, w.length());
         return new Outcome(new CoilSketch(coils, d.secondary() != null ? distance : Double.NaN,
                 d.secondary() != null ? offX : Double.NaN, bar), null);
     }
