@@ -14,7 +14,7 @@ import java.util.List;
  * @param adviceMax       upper end of that range, Hz
  * @param workpieceMass   kg
  * @param heatingTime     estimated time from cold to hot at the average power, s
- * @param coolantFlow     water flow the work coil needs for its loss at the chosen rise, m³/s
+ * @param coolantFlow     water flow the work coil needs for its loss at the chosen rise, m³/s (NaN when the coil is not a tube)
  * @param notes           approximations used and their validity
  */
 public record HeaterReport(HeaterPoint cold, HeaterPoint hot, double frequencyMin, double frequencyMax,

@@ -134,11 +134,15 @@ final class HeaterStage {
             notes.add("heating time not estimated: " + e.getMessage());
         }
         double worstCoilLoss = Math.max(coldPoint.coilLoss(), hotPoint.coilLoss());
-        CoolantFlow coolant = CoolantFlow.water(worstCoilLoss, w.coolantRise());
+        boolean tube = d.primary().wire() != null && d.primary().wire().kind() == org.tankwright.design.Enums.WireKind.TUBE;
+        double coolantFlow = tube ? CoolantFlow.water(worstCoilLoss, w.coolantRise()).volumeFlow() : Double.NaN;
+        if (!tube) {
+            notes.add("the work coil is not a tube: no coolant flow is computed; its loss goes to the air around it");
+        }
         FrequencyAdvice advice = work.advice(hotLoad, f);
         HeaterReport report = new HeaterReport(coldPoint, hotPoint, Math.min(f, hotPoint.resonantFrequency()),
                 Math.max(f, hotPoint.resonantFrequency()), advice.lowFrequency(), advice.highFrequency(), mass,
-                heatingTime, coolant.volumeFlow(), List.copyOf(notes));
+                heatingTime, coolantFlow, List.copyOf(notes));
         return new Heated(cold, hot, report);
     }
 

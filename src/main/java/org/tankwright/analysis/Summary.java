@@ -63,7 +63,8 @@ public final class Summary {
             row(sb, "coil current", q(h.cold().coilCurrent(), Dimension.CURRENT), q(h.hot().coilCurrent(), Dimension.CURRENT));
             row(sb, "cap. voltage", q(h.cold().capacitorVoltage(), Dimension.VOLTAGE), q(h.hot().capacitorVoltage(), Dimension.VOLTAGE));
             sb.append("  heating time about ").append(Double.isFinite(h.heatingTime()) ? q(h.heatingTime(), Dimension.TIME) : "never (see notes)")
-                    .append(", coolant ").append(Quantities.number(h.coolantFlow() * 60000, 3)).append(" L/min\n");
+                    .append(Double.isFinite(h.coolantFlow()) ? ", coolant " + Quantities.number(h.coolantFlow() * 60000, 3) + " L/min"
+                            : ", no coolant (not a tube)").append('\n');
         }
         sb.append("\nStress (rms unless peak)          V rms       V peak      I rms       loss        worst V peak\n");
         List<String> explained = new ArrayList<>();

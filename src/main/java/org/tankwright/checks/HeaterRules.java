@@ -96,7 +96,8 @@ final class HeaterRules {
                 add(out, Severity.CAUTION, loss, Limits.WORK_COIL_AIR_LOSS, "W", "$.primary.wire",
                         "The work coil dissipates up to " + q(loss, Dimension.POWER) + " but is not a cooled tube: "
                                 + "it will run hot enough to burn and to damage its insulation.",
-                        "Wind the work coil from copper tube with water flowing through it, or lower the coil current.");
+                        "Wind the work coil from copper tube with water flowing through it, or cool it with forced air and use "
+                                + "insulation rated for its temperature, or lower the coil current.");
             }
         }
     }

@@ -129,7 +129,8 @@ public final class BenchReadings {
             fullList.add(new Reading("Tank capacitor voltage", Dimension.VOLTAGE, c.capacitorVoltage(), t.capacitorVoltage(), vBand));
             fullList.add(new Reading("Tank capacitor current", Dimension.CURRENT, c.capacitorCurrent(), t.capacitorCurrent(), vBand));
             fullList.add(new Reading("Power into the workpiece", Dimension.POWER, c.power(), t.power(), pLim));
-            fullList.add(new Reading("Work-coil loss (to the coolant)", Dimension.POWER, c.coilLoss(), t.coilLoss(), pLim));
+            String lossTo = Fmt.has(h.coolantFlow()) ? "Work-coil loss (to the coolant)" : "Work-coil loss (to the air)";
+            fullList.add(new Reading(lossTo, Dimension.POWER, c.coilLoss(), t.coilLoss(), pLim));
             fullList.add(new Reading("Coil efficiency", Dimension.FRACTION, c.coilEfficiency(), t.coilEfficiency(), vBand));
             if (Fmt.has(n.sourceCurrent())) {
                 fullList.add(new Reading(currentDriven ? "Drive current" : "Input current", Dimension.CURRENT,

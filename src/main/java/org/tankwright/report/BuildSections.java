@@ -384,7 +384,8 @@ final class BuildSections {
                 + " to " + Fmt.reading(h.adviceMax(), Dimension.FREQUENCY));
         more.row("Workpiece mass", Fmt.reading(h.workpieceMass(), Dimension.MASS));
         more.row("Heating time, cold to hot (estimate)", Fmt.reading(h.heatingTime(), Dimension.TIME));
-        more.row("Coolant flow the work coil needs", Fmt.reading(h.coolantFlow(), Dimension.VOLUME_FLOW));
+        more.row("Coolant flow the work coil needs", Fmt.has(h.coolantFlow()) ? Fmt.reading(h.coolantFlow(), Dimension.VOLUME_FLOW)
+                : "none: the coil is not a tube (air-cooled)");
         flow.table(more);
     }
 }
