@@ -137,8 +137,16 @@ public final class CoilModel {
      * proximity ({@link #resistanceFilamentProximity}).
      */
     public double resistanceAc(double frequency, double temperature) {
-        ResistanceEstimate s = surfaceCurrent(frequency, temperature);
-        return s != null && s.valid() ? s.resistanceAc() : resistanceFilamentProximity(frequency, temperature);
+        if (SurfaceCurrentResistance.treats(geometry)) {
+            Conductor c = geometry.conductor();
+            double rho = c.material().resistivity(temperature);
+            double delta = WireLoss.skinDepth(rho, frequency);
+            SurfaceCurrentResistance.Solution s = thinSkin();
+            if (SurfaceCurrentResistance.valid(c, s, delta)) {
+                return SurfaceCurrentResistance.resistance(s, SurfaceCurrentResistance.radius(c), rho, delta);
+            }
+        }
+        return resistanceFilamentProximity(frequency, temperature);
     }
 
     /** The thin-skin surface-current solution of this coil, or null when the model does not apply. */
@@ -207,7 +215,11 @@ public final class CoilModel {
         double rdc = resistanceDc(t);
         double rs = resistanceSkin(f, t);
         double rac = resistanceAc(f, t);
-        double rp = rac - rs;
+        double rsShown = rs;
+        if (rac != resistanceFilamentProximity(f, t)) { // the surface-current model is chosen: its own split
+            rsShown = SurfaceCurrentResistance.skinPart(thinSkin(), SurfaceCurrentResistance.radius(c), rho, delta);
+        }
+        double rp = rac - rsShown;
         double lf = inductanceAt(f, t);
         double srf = selfResonance();
         double area = c.metalArea();
@@ -216,7 +228,7 @@ public final class CoilModel {
         String rText = resistanceModels.get(0).name().equals(SurfaceCurrentResistance.NAME)
                 ? SurfaceCurrentResistance.SOURCE : resistanceModelText(c);
         return new CoilResult(geometry.kind(), inductance(), chosen.name(), models, spread, lf,
-                apparentInductance(f, t), rdc, rac, rs, rp, rText, resistanceModels, delta,
+                apparentInductance(f, t), rdc, rac, rsShown, rp, rText, resistanceModels, delta,
                 2 * Math.PI * f * lf / rac, selfCapacitance, srf, SelfCapacitance.DESCRIPTION, srf / f,
                 wireLength, c.massPerMetre() * wireLength, op.current() / area,
                 op.current() / (area * rdc / rs), f, t, op.current(), qCurve(f, t, srf), warnings);
@@ -251,8 +263,16 @@ public final class CoilModel {
             }
         }
         if (geometry instanceof SingleLayerSolenoid s) {
-            double delta = WireLoss.skinDepth(geometry.conductor().material().resistivity(temperature), frequency);
-            ResistanceEstimate m = MedhurstResistance.estimate(s, rs, delta);
+            double rho = geometry.conductor().material().resistivity(temperature);
+            double delta = WireLoss.skinDepth(rho, frequency);
+            // Medhurst's straight wire: a tube is taken as the solid conductor of its outer diameter
+            double straight = rs;
+            if (geometry.conductor() instanceof Conductor.Tube t) {
+                double a = 0.5 * t.outerDiameter();
+                straight = rho * wireLength / (Math.PI * a * a)
+                        * org.tankwright.numerics.Kelvin.skinResistanceRatio(Math.sqrt(2) * a / delta);
+            }
+            ResistanceEstimate m = MedhurstResistance.estimate(s, straight, delta);
             if (m != null) {
                 out.add(m);
             }

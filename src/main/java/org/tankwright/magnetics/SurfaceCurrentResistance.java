@@ -188,6 +188,11 @@ public final class SurfaceCurrentResistance {
         return resistivity / delta * (s.isolated() * skin + (s.factor() - s.isolated()) * proximity);
     }
 
+    /** The isolated turns' part of {@link #resistance}: R_s·G0·F(x)·2δ/a, Ω (the skin part of the split shown). */
+    static double skinPart(Solution s, double a, double resistivity, double delta) {
+        return resistivity / delta * s.isolated() * Kelvin.skinResistanceRatio(Math.sqrt(2) * a / delta) * 2 * delta / a;
+    }
+
     /**
      * The model's estimate at a skin depth, with its verdict; null when the coil is not one it treats.
      *
@@ -206,9 +211,6 @@ public final class SurfaceCurrentResistance {
                     : "not computed: neighbouring turns touch (no gap between their metal surfaces)");
         }
         double aOverDelta = a / delta;
-        boolean thick = aOverDelta >= MIN_RADIUS_OVER_DELTA;
-        boolean gapOk = s.gap() >= MIN_GAP_OVER_DELTA * delta;
-        boolean wallOk = !(c instanceof Conductor.Tube t) || t.wall() >= MIN_WALL_OVER_DELTA * delta;
         String note = String.format(Locale.ROOT, "valid for wire radius ≥ %.0f skin depths (here %.3g), gap between "
                 + "turns ≥ %.0f skin depths (here %s)%s; thin-skin ratio to isolated turns %.3g, %d arcs per turn; "
                 + "high-frequency inductance %.4g H",
@@ -217,7 +219,13 @@ public final class SurfaceCurrentResistance {
                 c instanceof Conductor.Tube t ? String.format(Locale.ROOT, ", tube wall ≥ %.0f skin depths (here %.3g)",
                         MIN_WALL_OVER_DELTA, t.wall() / delta) : "",
                 s.ratio(), s.arcs(), s.inductance());
-        return new ResistanceEstimate(NAME, resistance(s, a, resistivity, delta), SOURCE, thick && gapOk && wallOk, note);
+        return new ResistanceEstimate(NAME, resistance(s, a, resistivity, delta), SOURCE, valid(c, s, delta), note);
+    }
+
+    /** True when a solved coil lies inside the model's validity at skin depth {@code delta}. */
+    static boolean valid(Conductor c, Solution s, double delta) {
+        return s != null && radius(c) >= MIN_RADIUS_OVER_DELTA * delta && s.gap() >= MIN_GAP_OVER_DELTA * delta
+                && (!(c instanceof Conductor.Tube t) || t.wall() >= MIN_WALL_OVER_DELTA * delta);
     }
 
     /** One solve: filaments, the mirror reduction, the system and its solution. */
