@@ -248,8 +248,10 @@ public final class CoilModel {
                 resistanceModelText(geometry.conductor()), true, surfaceChosen
                         ? "field at each wire's centre: good for spaced turns, low for close ones (docs/models.md); "
                                 + "the surface-current model is chosen here"
-                        : "the chosen value" + (surface != null ? " (the surface-current model is outside its validity "
-                                + "here)" : "") + "; for single-layer solenoids at thin skin depth it is within a few "
+                        : "the chosen value" + (surface == null ? ""
+                                : Double.isFinite(surface.resistanceAc()) ? " (the surface-current model is outside its "
+                                        + "validity here)" : " (surface-current model " + surface.note() + ")")
+                                + "; for single-layer solenoids at thin skin depth it is within a few "
                                 + "per cent of Medhurst's measurements for spaced turns (pitch ≥ 2.5 wire diameters), "
                                 + "less good for close turns (docs/models.md)");
         List<ResistanceEstimate> out = new ArrayList<>(3);

@@ -465,7 +465,7 @@ public final class SurfaceCurrentResistance {
          * into sub-arcs no longer than about the arcs' distance so that the near-singular logarithm is resolved.
          */
         private double meanLogBetween(int i, int k, int j, int l, double d) {
-            int parts = (int) Math.min(32, Math.ceil(width / Math.max(d, 1e-6 * width)));
+            int parts = (int) Math.min(4, Math.ceil(width / Math.max(d, 1e-6 * width)));
             double sub = 2 * Math.PI / m / parts;
             double sum = 0;
             for (int pi = 0; pi < parts; pi++) {
