@@ -360,9 +360,9 @@ public final class CoilCommand implements Callable<Integer> {
         System.out.println("AC resistance models (at the frequency):");
         System.out.printf(Locale.ROOT, "  %-21s %-12s %-6s %s%n", "model", "resistance", "valid", "source");
         for (ResistanceEstimate e : r.resistanceModels()) {
-            boolean chosen = e.name().equals(CoilModel.OURS);
+            boolean chosen = e == r.resistanceModels().get(0);
             System.out.printf(Locale.ROOT, "  %-21s %-12s %-6s %s%n", e.name() + (chosen ? " *" : ""),
-                    fmt(e.resistanceAc(), Dimension.RESISTANCE), e.valid() ? "yes" : "no", chosen ? "ours (see below)" : e.source());
+                    fmt(e.resistanceAc(), Dimension.RESISTANCE), e.valid() ? "yes" : "no", e.source());
             System.out.printf(Locale.ROOT, "  %-21s %-12s %-6s   %s%n", "", "", "", e.note());
         }
         System.out.println();

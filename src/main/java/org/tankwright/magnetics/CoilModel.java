@@ -25,6 +25,9 @@ public final class CoilModel {
     private final double fieldSum;
     private final double selfCapacitance;
     private final double wireLength;
+    /** Thin-skin surface-current solution, solved on first use (null inside when the model does not apply). */
+    private SurfaceCurrentResistance.Solution thinSkin;
+    private boolean thinSkinSolved;
 
     private CoilModel(CoilGeometry geometry) {
         this.geometry = geometry;
@@ -123,9 +126,45 @@ public final class CoilModel {
         return WireLoss.proximityCoefficient(c, rho, delta) * h2;
     }
 
-    /** AC resistance (skin + proximity), Ω. */
-    public double resistanceAc(double frequency, double temperature) {
+    /** AC resistance of our skin + proximity model (the filament-proximity model), Ω. */
+    public double resistanceFilamentProximity(double frequency, double temperature) {
         return resistanceSkin(frequency, temperature) + resistanceProximity(frequency, temperature);
+    }
+
+    /**
+     * The chosen AC resistance, Ω: the thin-skin surface-current model where it is valid (round wire or tube,
+     * round axisymmetric coil, wire radius and the gap between turns each several skin depths), else skin +
+     * proximity ({@link #resistanceFilamentProximity}).
+     */
+    public double resistanceAc(double frequency, double temperature) {
+        if (SurfaceCurrentResistance.treats(geometry)) {
+            Conductor c = geometry.conductor();
+            double rho = c.material().resistivity(temperature);
+            double delta = WireLoss.skinDepth(rho, frequency);
+            SurfaceCurrentResistance.Solution s = thinSkin();
+            if (SurfaceCurrentResistance.valid(c, s, delta)) {
+                return SurfaceCurrentResistance.resistance(s, SurfaceCurrentResistance.radius(c), rho, delta);
+            }
+        }
+        return resistanceFilamentProximity(frequency, temperature);
+    }
+
+    /** The thin-skin surface-current solution of this coil, or null when the model does not apply. */
+    public synchronized SurfaceCurrentResistance.Solution thinSkin() {
+        if (!thinSkinSolved) {
+            thinSkin = SurfaceCurrentResistance.of(geometry);
+            thinSkinSolved = true;
+        }
+        return thinSkin;
+    }
+
+    /** The surface-current model's estimate with its verdict, or null when it does not treat this coil. */
+    private ResistanceEstimate surfaceCurrent(double frequency, double temperature) {
+        if (!SurfaceCurrentResistance.treats(geometry)) {
+            return null;
+        }
+        double rho = geometry.conductor().material().resistivity(temperature);
+        return SurfaceCurrentResistance.estimate(geometry, thinSkin(), rho, WireLoss.skinDepth(rho, frequency));
     }
 
     /**
@@ -175,35 +214,67 @@ public final class CoilModel {
         double delta = WireLoss.skinDepth(rho, f);
         double rdc = resistanceDc(t);
         double rs = resistanceSkin(f, t);
-        double rp = resistanceProximity(f, t);
+        double rac = resistanceAc(f, t);
+        double rsShown = rs;
+        if (rac != resistanceFilamentProximity(f, t)) { // the surface-current model is chosen: its own split
+            rsShown = SurfaceCurrentResistance.skinPart(thinSkin(), SurfaceCurrentResistance.radius(c), rho, delta);
+        }
+        double rp = rac - rsShown;
         double lf = inductanceAt(f, t);
         double srf = selfResonance();
         double area = c.metalArea();
         List<ResistanceEstimate> resistanceModels = resistanceModels(f, t);
         List<String> warnings = warnings(f, srf, delta, op.current() / (area * rdc / rs), resistanceModels);
+        String rText = resistanceModels.get(0).name().equals(SurfaceCurrentResistance.NAME)
+                ? SurfaceCurrentResistance.SOURCE : resistanceModelText(c);
         return new CoilResult(geometry.kind(), inductance(), chosen.name(), models, spread, lf,
-                apparentInductance(f, t), rdc, rs + rp, rs, rp, resistanceModelText(c), resistanceModels, delta,
-                2 * Math.PI * f * lf / (rs + rp), selfCapacitance, srf, SelfCapacitance.DESCRIPTION, srf / f,
+                apparentInductance(f, t), rdc, rac, rsShown, rp, rText, resistanceModels, delta,
+                2 * Math.PI * f * lf / rac, selfCapacitance, srf, SelfCapacitance.DESCRIPTION, srf / f,
                 wireLength, c.massPerMetre() * wireLength, op.current() / area,
                 op.current() / (area * rdc / rs), f, t, op.current(), qCurve(f, t, srf), warnings);
     }
 
     /**
-     * Every AC-resistance model that applies at a frequency: ours ({@value #OURS}, the chosen value:
-     * skin + proximity from the filament field), then Medhurst's measured table for a single-layer solenoid of
-     * round wire or tube (a cross-check, with its own validity verdict).
+     * Every AC-resistance model that applies at a frequency, the chosen one first: the thin-skin surface-current
+     * model ({@value SurfaceCurrentResistance#NAME}) where it is valid, else ours skin + proximity
+     * ({@value #OURS}); then the others, with their own validity verdicts (Medhurst's measured table for a
+     * single-layer solenoid of round wire or tube is a cross-check).
      */
     public List<ResistanceEstimate> resistanceModels(double frequency, double temperature) {
         double rs = resistanceSkin(frequency, temperature);
-        List<ResistanceEstimate> out = new ArrayList<>(2);
-        out.add(new ResistanceEstimate(OURS, rs + resistanceProximity(frequency, temperature),
-                resistanceModelText(geometry.conductor()), true,
-                "the chosen value; for single-layer solenoids at thin skin depth it is within a few per cent of "
-                        + "Medhurst's measurements for spaced turns (pitch ≥ 2.5 wire diameters), less good for close "
-                        + "turns (docs/models.md)"));
+        ResistanceEstimate surface = surfaceCurrent(frequency, temperature);
+        boolean surfaceChosen = surface != null && surface.valid();
+        ResistanceEstimate filament = new ResistanceEstimate(OURS, rs + resistanceProximity(frequency, temperature),
+                resistanceModelText(geometry.conductor()), true, surfaceChosen
+                        ? "field at each wire's centre: good for spaced turns, low for close ones (docs/models.md); "
+                                + "the surface-current model is chosen here"
+                        : "the chosen value" + (surface == null ? ""
+                                : Double.isFinite(surface.resistanceAc()) ? " (the surface-current model is outside its "
+                                        + "validity here)" : " (surface-current model " + surface.note() + ")")
+                                + "; for single-layer solenoids at thin skin depth it is within a few "
+                                + "per cent of Medhurst's measurements for spaced turns (pitch ≥ 2.5 wire diameters), "
+                                + "less good for close turns (docs/models.md)");
+        List<ResistanceEstimate> out = new ArrayList<>(3);
+        if (surfaceChosen) {
+            out.add(surface);
+            out.add(filament);
+        } else {
+            out.add(filament);
+            if (surface != null && Double.isFinite(surface.resistanceAc())) {
+                out.add(surface);
+            }
+        }
         if (geometry instanceof SingleLayerSolenoid s) {
-            double delta = WireLoss.skinDepth(geometry.conductor().material().resistivity(temperature), frequency);
-            ResistanceEstimate m = MedhurstResistance.estimate(s, rs, delta);
+            double rho = geometry.conductor().material().resistivity(temperature);
+            double delta = WireLoss.skinDepth(rho, frequency);
+            // Medhurst's straight wire: a tube is taken as the solid conductor of its outer diameter
+            double straight = rs;
+            if (geometry.conductor() instanceof Conductor.Tube t) {
+                double a = 0.5 * t.outerDiameter();
+                straight = rho * wireLength / (Math.PI * a * a)
+                        * org.tankwright.numerics.Kelvin.skinResistanceRatio(Math.sqrt(2) * a / delta);
+            }
+            ResistanceEstimate m = MedhurstResistance.estimate(s, straight, delta);
             if (m != null) {
                 out.add(m);
             }
@@ -211,9 +282,9 @@ public final class CoilModel {
         return List.copyOf(out);
     }
 
-    /** Name of our resistance model in results. */
+    /** Name of our skin + proximity resistance model in results. */
     public static final String OURS = "filament-proximity";
-    /** Relative difference between our resistance and a valid cross-check above which a caution is shown. */
+    /** Relative difference between the chosen resistance and a valid cross-check above which a caution is shown. */
     private static final double RESISTANCE_DISAGREEMENT = 0.2;
 
     /** Q curve on 41 log-spaced points from f/10 to 10 f, stopping below 0.9 f_SR. */
@@ -225,14 +296,9 @@ public final class CoilModel {
         }
         int n = 41;
         CoilResult.QPoint[] points = new CoilResult.QPoint[n];
-        Conductor c = geometry.conductor();
-        double rho = c.material().resistivity(temperature);
-        double rdc = resistanceDc(temperature);
-        double h2 = fieldSum + WireLoss.internalFieldSquared(c) * wireLength;
         for (int i = 0; i < n; i++) {
             double f = lo * Math.pow(hi / lo, i / (double) (n - 1));
-            double delta = WireLoss.skinDepth(rho, f);
-            double rac = rdc * WireLoss.skinRatio(c, delta) + WireLoss.proximityCoefficient(c, rho, delta) * h2;
+            double rac = resistanceAc(f, temperature);
             double lf = inductanceAt(f, temperature);
             double r = f / srf;
             points[i] = new CoilResult.QPoint(f, rac, 2 * Math.PI * f * lf / rac, lf / (1 - r * r));
@@ -243,15 +309,20 @@ public final class CoilModel {
     private List<String> warnings(double f, double srf, double delta, double currentDensityAc,
             List<ResistanceEstimate> resistanceModels) {
         List<String> w = new ArrayList<>();
-        double ours = resistanceModels.get(0).resistanceAc();
+        ResistanceEstimate chosenR = resistanceModels.get(0);
+        double ours = chosenR.resistanceAc();
+        boolean surfaceChosen = chosenR.name().equals(SurfaceCurrentResistance.NAME);
         for (ResistanceEstimate e : resistanceModels.subList(1, resistanceModels.size())) {
             double gap = e.resistanceAc() / ours - 1;
             if (e.valid() && Math.abs(gap) > RESISTANCE_DISAGREEMENT) {
-                w.add(String.format(Locale.ROOT, "AC resistance: %s gives %.3g Ω, %+.0f %% from ours (%.3g Ω); the "
-                        + "proximity model takes the field at each wire's centre and neglects its variation across close "
-                        + "turns (pitch under about 2.5 wire diameters), where Medhurst's measurements are the better "
-                        + "guide",
-                        e.name(), e.resistanceAc(), 100 * gap, ours));
+                w.add(String.format(Locale.ROOT, "AC resistance: %s gives %.3g Ω, %+.0f %% from the chosen %s (%.3g Ω); %s",
+                        e.name(), e.resistanceAc(), 100 * gap, chosenR.name(), ours, surfaceChosen
+                                ? "the chosen thin-skin surface-current model solves the current on each turn's surface; "
+                                        + "Medhurst's table was measured on coils of 30-50 turns and the centre-field "
+                                        + "proximity model neglects the field's variation across close turns (docs/models.md)"
+                                : "the proximity model takes the field at each wire's centre and neglects its variation "
+                                        + "across close turns (pitch under about 2.5 wire diameters), where Medhurst's "
+                                        + "measurements are the better guide"));
             }
         }
         if (currentDensityAc > HOT_CURRENT_DENSITY) {

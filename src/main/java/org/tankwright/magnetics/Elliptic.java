@@ -33,6 +33,13 @@ public final class Elliptic {
         if (m == 1.0) {
             return 1.0;
         }
+        double[] ke = new double[2];
+        kAndE(m, ke);
+        return ke[1];
+    }
+
+    /** K(m) and E(m) from one arithmetic-geometric mean into {@code out[0]}, {@code out[1]}; 0 ≤ m < 1, unchecked. */
+    static void kAndE(double m, double[] out) {
         double a = 1.0;
         double b = Math.sqrt(1.0 - m);
         double sum = 0.5 * m; // 2^(-1) c0², c0² = m
@@ -48,7 +55,8 @@ public final class Elliptic {
                 break;
             }
         }
-        return Math.PI / (2.0 * a) * (1.0 - sum);
+        out[0] = Math.PI / (2.0 * a);
+        out[1] = out[0] * (1.0 - sum);
     }
 
     private static void checkParameter(double m) {

@@ -79,7 +79,7 @@ final class MedhurstResistance {
      * The estimate for a single-layer solenoid of solid round wire or tube (the tube as a solid conductor of
      * its outer diameter, which holds when the wall is several skin depths), or null for other conductors.
      *
-     * @param skinResistance the straight wire's AC resistance R_dc·F(x), Ω
+     * @param skinResistance the straight wire's AC resistance R_dc·F(x), Ω (a tube: the solid conductor of its outer diameter)
      * @param delta          skin depth, m
      */
     static ResistanceEstimate estimate(SingleLayerSolenoid s, double skinResistance, double delta) {

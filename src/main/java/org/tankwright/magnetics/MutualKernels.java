@@ -136,10 +136,11 @@ public final class MutualKernels {
         return 2.0 * (la * atanh(lb / (la + r)) + lb * atanh(la / (lb + r)));
     }
 
-    private static final double[] GL_X = {
+    /** 8-point Gauss-Legendre nodes and weights on [−1, 1]. */
+    static final double[] GL_X = {
         -0.9602898564975363, -0.7966664774136267, -0.5255324099163290, -0.1834346424956498,
         0.1834346424956498, 0.5255324099163290, 0.7966664774136267, 0.9602898564975363};
-    private static final double[] GL_W = {
+    static final double[] GL_W = {
         0.1012285362903763, 0.2223810344533745, 0.3137066458778873, 0.3626837833783620,
         0.3626837833783620, 0.3137066458778873, 0.2223810344533745, 0.1012285362903763};
 

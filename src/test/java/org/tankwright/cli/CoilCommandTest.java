@@ -40,13 +40,17 @@ class CoilCommandTest {
             sawFilament |= m.get("name").getAsString().equals("filament");
         }
         assertTrue(sawWheeler && sawSheet && sawFilament);
-        // AC resistance models side by side: ours (the chosen value) first, then Medhurst's table
+        // AC resistance models side by side, the chosen value first: at 100 kHz the 1 mm wire's radius is 2.4 skin
+        // depths, below the surface-current model's validity, so skin + proximity is chosen; then the others
         JsonArray rModels = o.getAsJsonArray("resistance_models");
-        assertEquals(2, rModels.size());
+        assertEquals(3, rModels.size());
         JsonObject ours = rModels.get(0).getAsJsonObject();
         assertEquals("filament-proximity", ours.get("name").getAsString());
         assertEquals(o.get("resistance_ac_ohm").getAsDouble(), ours.get("resistance_ac_ohm").getAsDouble(), 0);
-        JsonObject med = rModels.get(1).getAsJsonObject();
+        JsonObject surface = rModels.get(1).getAsJsonObject();
+        assertEquals("surface-current", surface.get("name").getAsString());
+        assertFalse(surface.get("valid").getAsBoolean());
+        JsonObject med = rModels.get(2).getAsJsonObject();
         assertEquals("medhurst-table", med.get("name").getAsString());
         assertTrue(med.has("source") && med.has("valid") && med.has("note"));
         assertFalse(med.get("valid").getAsBoolean(), "1 mm wire at 100 kHz: skin effect not developed");

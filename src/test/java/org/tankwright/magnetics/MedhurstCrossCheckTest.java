@@ -113,27 +113,33 @@ class MedhurstCrossCheckTest {
         assertEquals(MedhurstResistance.ratio(10, 1), MedhurstResistance.ratio(40, 1), 1e-12, "clamped above ℓ/D 10");
     }
 
+    private static ResistanceEstimate byName(List<ResistanceEstimate> all, String name) {
+        return all.stream().filter(e -> e.name().equals(name)).findFirst().orElseThrow(() -> new AssertionError(name));
+    }
+
     /** The estimate shown to the user: ψ × the straight wire's skin resistance, with its validity verdict. */
     @Test
     void estimateAndVerdict() {
         SingleLayerSolenoid s = new SingleLayerSolenoid(40e-3, 40, 2e-3, WIRE); // ℓ/D = 2, d/p = 0.5: ψ = 1.74
         CoilModel m = CoilModel.of(s);
         List<ResistanceEstimate> all = m.resistanceModels(F, 20);
-        assertEquals(CoilModel.OURS, all.get(0).name());
+        assertEquals(SurfaceCurrentResistance.NAME, all.get(0).name(), "the chosen model comes first");
         assertEquals(m.resistanceAc(F, 20), all.get(0).resistanceAc(), 0);
-        ResistanceEstimate med = all.get(1);
-        assertEquals(MedhurstResistance.NAME, med.name());
+        assertEquals(m.resistanceFilamentProximity(F, 20), byName(all, CoilModel.OURS).resistanceAc(), 0);
+        ResistanceEstimate med = byName(all, MedhurstResistance.NAME);
         assertEquals(1.74 * m.resistanceSkin(F, 20), med.resistanceAc(), 1e-12);
         assertTrue(med.valid(), med.note());
         // 100 kHz: δ = 0.209 mm, wire radius only 2.4 skin depths: skin effect not developed
-        assertFalse(m.resistanceModels(100e3, 20).get(1).valid());
+        assertFalse(byName(m.resistanceModels(100e3, 20), MedhurstResistance.NAME).valid());
         // ℓ/D = 0.1 lies outside the measured grid
-        assertFalse(CoilModel.of(new SingleLayerSolenoid(800e-3, 40, 2e-3, WIRE)).resistanceModels(F, 20).get(1).valid());
-        // litz and multilayer coils get no Medhurst estimate
+        assertFalse(byName(CoilModel.of(new SingleLayerSolenoid(800e-3, 40, 2e-3, WIRE)).resistanceModels(F, 20),
+                MedhurstResistance.NAME).valid());
+        // litz gets neither Medhurst nor surface-current estimate; multilayer coils get no Medhurst estimate
         Conductor litz = new Conductor.Litz(100, 0.1e-3, 1.25e-3, ConductorMaterial.COPPER);
         assertEquals(1, CoilModel.of(new SingleLayerSolenoid(40e-3, 40, 2e-3, litz)).resistanceModels(F, 20).size());
         assertNull(MedhurstResistance.estimate(new SingleLayerSolenoid(40e-3, 40, 2e-3, litz), 1, 1e-5));
-        assertEquals(1, CoilModel.of(MultilayerSolenoid.closeWound(20e-3, 60, 3, WIRE)).resistanceModels(F, 20).size());
+        assertTrue(CoilModel.of(MultilayerSolenoid.closeWound(20e-3, 60, 3, WIRE)).resistanceModels(F, 20).stream()
+                .noneMatch(e -> e.name().equals(MedhurstResistance.NAME)));
     }
 
     /** A close-wound short coil at thin skin depth, where the two disagree by more than 20 %, carries a caution. */
