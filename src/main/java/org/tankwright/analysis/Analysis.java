@@ -65,14 +65,14 @@ public final class Analysis {
             coupling = linked.report();
             LinkValues values = new LinkValues(coupling.l1(), coupling.l2(), coupling.mutual(),
                     primary.report().resistanceAc(), secondary.report().resistanceAc());
-            tuned = NetworkStage.tune(NetworkStage.linkDesign(d, f, values, fixed(d.compensation().c1()),
+            tuned = firstTuning(d, NetworkStage.linkDesign(d, f, values, fixed(d.compensation().c1()),
                     fixed(d.compensation().c2())));
             // Banks are sized for the worst stress over the envelope when it is solved, else for the operating point.
             EnvelopeReport first = full && EnvelopeStage.applies(d) ? EnvelopeStage.link(d, tuned, linked) : null;
             tuned = withBanks(d, tuned, first, banks, notes, full);
         } else {
             LinkValues values = LinkValues.tank(primary.report().inductance(), primary.report().resistanceAc());
-            tuned = NetworkStage.tune(NetworkStage.linkDesign(d, f, values, fixed(d.compensation().c1()), 0));
+            tuned = firstTuning(d, NetworkStage.linkDesign(d, f, values, fixed(d.compensation().c1()), 0));
             tuned = withBanks(d, tuned, null, banks, notes, false);
         }
         if (heated != null && BankStage.enabled(d)) {
@@ -117,6 +117,14 @@ public final class Analysis {
         return loss > 0 ? reactive / loss : Double.NaN;
     }
 
+    /**
+     * The first tuning of a link or tank: without the zero-phase scan when banks will replace its
+     * capacitors (the network is then solved again with theirs, and that solve scans).
+     */
+    private static TuningResult firstTuning(Design d, LinkDesign ld) {
+        return BankStage.enabled(d) ? NetworkStage.tuneBeforeBanks(ld) : NetworkStage.tune(ld);
+    }
+
     private static double fixed(Double c) {
         return c == null ? 0 : c;
     }
@@ -132,7 +140,7 @@ public final class Analysis {
         BankStage.Chosen c1 = addBank(d, op, envelope, "C1", tuned.c1(), banks, notes);
         BankStage.Chosen c2 = link ? addBank(d, op, envelope, "C2", tuned.c2(), banks, notes) : null;
         if (c1 == null && c2 == null) {
-            return thresholds ? NetworkStage.tune(tuned.design(), true) : tuned;
+            return NetworkStage.tune(tuned.design(), thresholds); // the first tuning had no scan
         }
         LinkDesign ld = tuned.design();
         double newC1 = c1 != null ? c1.bank().capacitance() : tuned.c1();

@@ -27,7 +27,14 @@ final class CoilStage {
     /** Packing of round strands in a litz bundle when its outer diameter is not given (common practice). */
     static final double LITZ_FILL = 0.6;
 
+    /** The coil models' last results: an edit elsewhere in the design leaves a coil's model as it was. */
+    private static final Memo<Modelled, CoilResult> MODELS = new Memo<>(8);
+
     private CoilStage() {
+    }
+
+    /** The inputs of one coil-model run (records, so equal inputs compare equal). */
+    private record Modelled(CoilGeometry geometry, OperatingPoint point) {
     }
 
     /** One analysed coil: the geometry (null when measured), the model's result (null when measured) and its report. */
@@ -47,7 +54,8 @@ final class CoilStage {
             throw new AnalysisException(path + ": the " + role + " coil does not fit together: "
                     + String.join("; ", problems), true);
         }
-        CoilResult r = CoilModel.analyse(g, new OperatingPoint(frequency, c.temperature(), 0.0));
+        CoilResult r = MODELS.get(new Modelled(g, new OperatingPoint(frequency, c.temperature(), 0.0)),
+                m -> CoilModel.analyse(m.geometry(), m.point()));
         return new Analysed(c, g, r, report(role, c, g, r, frequency));
     }
 

@@ -28,7 +28,17 @@ final class CouplingStage {
     /** Points per axis of the envelope grid. */
     static final int GRID_POINTS = 5;
 
+    /**
+     * The last few compiled links: a compiled link keeps its pair sums and the image series it has summed
+     * (per distance), so an edit that leaves both coils and plates as they were reuses them.
+     */
+    private static final Memo<Pair, CoupledCoils> LINKS = new Memo<>(4);
+
     private CouplingStage() {
+    }
+
+    /** The two coils of a link as the coupling model sees them (records: equal coils compare equal). */
+    private record Pair(CoupledCoils.Coil a, CoupledCoils.Coil b) {
     }
 
     /** The link's coupling, with the model when both coils have geometry, else from the entered values. */
@@ -72,7 +82,8 @@ final class CouplingStage {
             return new Linked(null, new CouplingReport(m, k, la, lb, source, Math.abs(k), Math.abs(k), "nominal",
                     "nominal", Double.NaN, List.of(), notes), null);
         }
-        CoupledCoils link = new CoupledCoils(coil("primary", a, false), coil("secondary", b, true));
+        CoupledCoils link = LINKS.get(new Pair(coil("primary", a, false), coil("secondary", b, true)),
+                pair -> new CoupledCoils(pair.a(), pair.b()));
         double distance = p.distance();
         CouplingResult nominal = link.at(distance, p.offsetX(), p.offsetY());
         double l1 = nominal.inductanceA();

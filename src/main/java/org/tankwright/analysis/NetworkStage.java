@@ -87,6 +87,18 @@ final class NetworkStage {
         }
     }
 
+    /**
+     * Tunes and solves a link or tank without the zero-phase scan and the efficiency optimum: the first
+     * tuning, whose capacitors become real banks and are solved again with the scan.
+     */
+    static TuningResult tuneBeforeBanks(LinkDesign ld) {
+        try {
+            return Tuner.tuneWithoutScan(ld);
+        } catch (IllegalArgumentException e) {
+            throw new AnalysisException("the network cannot be solved: " + e.getMessage(), false);
+        }
+    }
+
     /** Tunes and solves; {@code thresholds} adds the costly search for the load and coupling at which the link bifurcates. */
     static TuningResult tune(LinkDesign ld, boolean thresholds) {
         try {

@@ -5,6 +5,8 @@ import org.tankwright.magnetics.Filament;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
 
 /**
  * Two coils with parallel axes facing each other, each with an optional plate behind it: coil a
@@ -76,6 +78,15 @@ public final class CoupledCoils {
     private final double etaB;
     private final double radiusSum;
     private final SpectralLink spectral;
+    /**
+     * The self terms' image series by placement: they depend on the distance only (through plate B), so an
+     * offset sweep or a grid over distance × offset sums them once per distance. Bounded; values only.
+     */
+    private final Map<SelfKey, double[]> selfSeries = new ConcurrentHashMap<>();
+    private static final int SELF_SERIES_KEPT = 256;
+
+    private record SelfKey(double distance, double tolerance) {
+    }
 
     public CoupledCoils(Coil coilA, Coil coilB) {
         this(coilA, coilB, true);
@@ -99,11 +110,12 @@ public final class CoupledCoils {
         ab = new PairSum(a, b);
         spectral = spectralAllowed && a.axisymmetric() && b.axisymmetric() ? new SpectralLink(a, b, coilA.plate(), coilB.plate()) : null;
         boolean images = spectral == null && (etaA != 0 || etaB != 0);
-        abMirror = images ? new PairSum(a, b.transformed(true, 0, 0, 0, 1)) : null;
+        // a flat coil is its own mirror image: its mirrored pair sums are the direct ones
+        abMirror = !images ? null : b.flat() ? ab : new PairSum(a, b.mirrored());
         aa = images ? new PairSum(a, a) : null;
-        aaMirror = images ? new PairSum(a, a.transformed(true, 0, 0, 0, 1)) : null;
+        aaMirror = !images ? null : a.flat() ? aa : new PairSum(a, a.mirrored());
         bb = images ? new PairSum(b, b) : null;
-        bbMirror = images ? new PairSum(b, b.transformed(true, 0, 0, 0, 1)) : null;
+        bbMirror = !images ? null : b.flat() ? bb : new PairSum(b, b.mirrored());
     }
 
     /** Coil a as given. */
@@ -194,14 +206,22 @@ public final class CoupledCoils {
                                      double[] values, List<String> notes) {
         ImageSeries.Sum mb = ImageSeries.sum(zA, etaA, zB, etaB, distance, values[0], radiusSum,
                 (mirror, shift, w) -> w * (mirror ? abMirror : ab).mutual(dx, dy, shift, tol));
-        ImageSeries.Sum sa = ImageSeries.sum(zA, etaA, zB, etaB, 0, coilA.selfInductance(), radiusSum,
-                (mirror, shift, w) -> w * (mirror ? aaMirror : aa).mutual(0, 0, shift, tol));
-        ImageSeries.Sum sb = ImageSeries.sum(zA, etaA, zB, etaB, distance, coilB.selfInductance(), radiusSum,
-                (mirror, shift, w) -> w * (mirror ? bbMirror : bb).mutual(0, 0, shift - distance, tol));
+        double[] self = selfSeries.get(new SelfKey(distance, tol));
+        if (self == null) {
+            ImageSeries.Sum sa = ImageSeries.sum(zA, etaA, zB, etaB, 0, coilA.selfInductance(), radiusSum, true,
+                    (mirror, shift, w) -> w * (mirror ? aaMirror : aa).mutual(0, 0, shift, tol));
+            ImageSeries.Sum sb = ImageSeries.sum(zA, etaA, zB, etaB, distance, coilB.selfInductance(), radiusSum, true,
+                    (mirror, shift, w) -> w * (mirror ? bbMirror : bb).mutual(0, 0, shift - distance, tol));
+            self = new double[] {sa.value(), sb.value(), sa.truncated() || sb.truncated() ? 1 : 0};
+            if (selfSeries.size() >= SELF_SERIES_KEPT) {
+                selfSeries.clear();
+            }
+            selfSeries.put(new SelfKey(distance, tol), self);
+        }
         values[0] += mb.value();
-        values[1] += sa.value();
-        values[2] += sb.value();
-        if (mb.truncated() || sa.truncated() || sb.truncated()) {
+        values[1] += self[0];
+        values[2] += self[1];
+        if (mb.truncated() || self[2] != 0) {
             notes.add("image series between the two plates cut after " + ImageSeries.MAX_ORDER
                     + " orders with a tail estimate: plates very close for their size");
             return false;

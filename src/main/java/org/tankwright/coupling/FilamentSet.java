@@ -219,6 +219,26 @@ public final class FilamentSet {
         return m;
     }
 
+    /** True when every filament lies in the plane z = 0 (the set is then its own mirror image in that plane). */
+    boolean flat() {
+        for (double z : rz) {
+            if (z != 0) {
+                return false;
+            }
+        }
+        for (int i = 0; i < sw.length; i++) {
+            if (s[6 * i + 2] != 0 || s[6 * i + 5] != 0) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** This set mirrored in the plane z = 0 (itself when it lies in that plane). */
+    FilamentSet mirrored() {
+        return flat() ? this : transformed(true, 0, 0, 0, 1);
+    }
+
     /** True when every filament is a ring centred on the z axis (the coil is axisymmetric). */
     public boolean axisymmetric() {
         if (sw.length > 0) {

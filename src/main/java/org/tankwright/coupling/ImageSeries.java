@@ -37,6 +37,16 @@ final class ImageSeries {
      * @param radiusSum sum of the two coils' outer radii (sets where the dipole tail begins)
      */
     static Sum sum(double zA, double etaA, double zB, double etaB, double z0, double direct, double radiusSum, Term t) {
+        return sum(zA, etaA, zB, etaB, z0, direct, radiusSum, false, t);
+    }
+
+    /**
+     * As {@link #sum(double, double, double, double, double, double, double, Term)}; {@code selfImages} when
+     * the source sums with its own images (a coil's self term): its two translated images of an order then
+     * contribute alike, M(a, a + s) = M(a − s, a) = M(a, a − s), and only one is evaluated.
+     */
+    static Sum sum(double zA, double etaA, double zB, double etaB, double z0, double direct, double radiusSum,
+                   boolean selfImages, Term t) {
         double total = 0;
         if (etaA != 0) {
             total += t.value(true, 2 * zA - z0, etaA);
@@ -56,8 +66,8 @@ final class ImageSeries {
             w *= w2;
             double order = t.value(true, 2 * zA - z0 - 2 * n * l, etaA * w)
                     + t.value(true, 2 * zB - z0 + 2 * n * l, etaB * w)
-                    + t.value(false, z0 + 2 * n * l, w)
-                    + t.value(false, z0 - 2 * n * l, w);
+                    + (selfImages ? 2 * t.value(false, z0 + 2 * n * l, w)
+                    : t.value(false, z0 + 2 * n * l, w) + t.value(false, z0 - 2 * n * l, w));
             total += order;
             last[0] = last[1];
             last[1] = last[2];

@@ -55,20 +55,33 @@ public final class SegmentKernel {
         vx /= l2;
         vy /= l2;
         vz /= l2;
-        double cos = ux * vx + uy * vy + uz * vz;
-        double cx = uy * vz - uz * vy;
-        double cy = uz * vx - ux * vz;
-        double cz = ux * vy - uy * vx;
-        double sin2 = cx * cx + cy * cy + cz * cz;
-        if (Math.abs(cos) <= 1e-14) {
+        int relation = relation(ux, uy, uz, vx, vy, vz);
+        if (relation == PERPENDICULAR) {
             return 0;
         }
-        if (sin2 <= 1e-24) {
+        if (relation == PARALLEL) {
             return parallel(l1, ux, uy, uz, bx0 - ax0, by0 - ay0, bz0 - az0, bx1 - ax0, by1 - ay0, bz1 - az0, touching);
         }
         inner.set(ax0, ay0, az0, ux, uy, uz, bx0, by0, bz0, bx1, by1, bz1, l2);
         double integral = AdaptiveGauss.integrate(inner, 0, l1, TOLERANCE);
-        return MU0_4PI * cos * integral;
+        return MU0_4PI * (ux * vx + uy * vy + uz * vz) * integral;
+    }
+
+    /** Relations of two filaments' directions: M is then 0, Grover's closed form, or the quadrature. */
+    static final int PERPENDICULAR = 0;
+    static final int PARALLEL = 1;
+    static final int OBLIQUE = 2;
+
+    /** How two unit directions relate: perpendicular (|cos| ≤ 1e-14), parallel (sin² ≤ 1e-24) or oblique. */
+    static int relation(double ux, double uy, double uz, double vx, double vy, double vz) {
+        double cos = ux * vx + uy * vy + uz * vz;
+        if (Math.abs(cos) <= 1e-14) {
+            return PERPENDICULAR;
+        }
+        double cx = uy * vz - uz * vy;
+        double cy = uz * vx - ux * vz;
+        double cz = ux * vy - uy * vx;
+        return cx * cx + cy * cy + cz * cz <= 1e-24 ? PARALLEL : OBLIQUE;
     }
 
     private static double parallel(double l1, double ux, double uy, double uz,
@@ -78,7 +91,14 @@ public final class SegmentKernel {
         double ex = px - t0 * ux;
         double ey = py - t0 * uy;
         double ez = pz - t0 * uz;
-        double d = Math.sqrt(ex * ex + ey * ey + ez * ez);
+        return parallel(l1, t0, t1, Math.sqrt(ex * ex + ey * ey + ez * ez), touching);
+    }
+
+    /**
+     * Grover's closed form for parallel filaments: the first runs from 0 to l1 along its axis, the
+     * second from t0 to t1 along the same axis (t1 &lt; t0 when antiparallel) at distance d from it.
+     */
+    static double parallel(double l1, double t0, double t1, double d, double touching) {
         double scale = l1 + Math.abs(t1 - t0);
         if (d <= 1e-12 * scale) {
             double lo = Math.min(t0, t1);
@@ -95,22 +115,25 @@ public final class SegmentKernel {
         return MU0_4PI * (f(l1 - t0, d) - f(t0, d) - f(l1 - t1, d) + f(t1, d));
     }
 
+    /** F(u) = u·asinh(u/d) − √(u²+d²), even in u; the square root is shared with the logarithm. */
     private static double f(double u, double d) {
-        return u * asinh(u / d) - Math.sqrt(u * u + d * d);
+        double a = Math.abs(u);
+        double r = Math.sqrt(a * a + d * d);
+        double x = a / d;
+        double asinh;
+        if (x < 1e-4) {
+            asinh = x * (1 - x * x / 6);
+        } else if (x > 1e8) {
+            asinh = Math.log(2 * x);
+        } else {
+            asinh = Math.log((a + r) / d);
+        }
+        return a * asinh - r;
     }
 
     private static double g(double u) {
         double a = Math.abs(u);
         return a == 0 ? 0 : a * Math.log(a) - a;
-    }
-
-    static double asinh(double x) {
-        double a = Math.abs(x);
-        double r = a > 1e8 ? Math.log(2 * a) : Math.log(a + Math.sqrt(a * a + 1));
-        if (a < 1e-4) {
-            r = a * (1 - a * a / 6);
-        }
-        return Math.copySign(r, x);
     }
 
     /** ∫_B dt/|P(s) − Q(t)| = 2 atanh(L2/(R0+R1)) = ln((R0+R1+L2)/(R0+R1−L2)) along the first filament. */

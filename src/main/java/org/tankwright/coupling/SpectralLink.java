@@ -219,8 +219,9 @@ final class SpectralLink {
         double dn = 0;
         for (int i = 0; i < s.rr.length; i++) {
             double f = s.rw[i] * s.rr[i] * Bessel.j1(k * s.rr[i]);
-            u += f * Math.exp(-k * (top - s.rz[i]));
-            dn += f * Math.exp(-k * (s.rz[i] - bottom));
+            // a ring in the top (bottom) plane has no decay to it: e^0 = 1 without the call (flat coils)
+            u += s.rz[i] == top ? f : f * Math.exp(-k * (top - s.rz[i]));
+            dn += s.rz[i] == bottom ? f : f * Math.exp(-k * (s.rz[i] - bottom));
         }
         return new double[] {u, dn};
     }

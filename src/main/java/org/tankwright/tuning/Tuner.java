@@ -35,7 +35,16 @@ public final class Tuner {
      * which the design bifurcates (the costly part, a few hundred thousand solves) for fast recomputes.
      */
     public static TuningResult tune(LinkDesign d, boolean thresholds) {
-        return d.topology().isLink() ? tuneLink(d, thresholds) : tuneTank(d);
+        return d.topology().isLink() ? tuneLink(d, thresholds, true) : tuneTank(d);
+    }
+
+    /**
+     * Tunes and solves a link or a tank without the scan for every zero-phase frequency, the efficiency
+     * optimum and the bifurcation thresholds: for a first tuning whose capacitors are replaced by real
+     * parts and solved again (that second solve makes the scan).
+     */
+    public static TuningResult tuneWithoutScan(LinkDesign d) {
+        return d.topology().isLink() ? tuneLink(d, false, false) : tuneTank(d, false);
     }
 
     /** The network of a design with the given capacitors (the load as its AC resistance, 1 Ω for a battery until solved). */
@@ -83,7 +92,7 @@ public final class Tuner {
         return new TuningResult(d, c, 0, cText, 0, phase, op, zpf, null, null, null, null, notes);
     }
 
-    private static TuningResult tuneLink(LinkDesign d, boolean thresholds) {
+    private static TuningResult tuneLink(LinkDesign d, boolean thresholds, boolean scan) {
         double f = d.frequency();
         double w = 2 * Math.PI * f;
         LinkValues v = d.coils();
@@ -123,8 +132,8 @@ public final class Tuner {
             notes.add("target phase " + d.targetPhase() + "° not reachable by C1 alone: " + phase.note());
         }
         OperatingPoint op = OperatingPoint.of(s, t, d.source(), load, f, d.parts());
-        double[] zpf = Bifurcation.zeroPhaseFrequencies(s, f);
-        EfficiencyOptimum optimum = EfficiencyOptimum.numerical(s, f);
+        double[] zpf = scan ? Bifurcation.zeroPhaseFrequencies(s, f) : new double[0];
+        EfficiencyOptimum optimum = scan ? EfficiencyOptimum.numerical(s, f) : null;
         EfficiencyOptimum closed = null;
         if (t == Topology.SS && v.r1() > 0 && v.r2() > 0) {
             closed = EfficiencyOptimum.seriesSeriesClosedForm(v.k(), w * v.l1() / v.r1(), w * v.l2() / v.r2(), v.r2());
