@@ -1,5 +1,6 @@
 package org.tankwright.capacitors;
 
+import org.tankwright.provenance.Provenance;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -19,7 +20,7 @@ import java.util.List;
  */
 public final class BankEvaluator {
     private static final double FAR_OVER = 1e6;
-    private static final Provenance PROVENANCE = new Provenance("series R-L-C part model; capacitive sharing at tolerance edge",
+    private static final Provenance PROVENANCE = Provenance.ranged("series R-L-C part model; capacitive sharing at tolerance edge",
             "ESR = tan δ/(ωC), SRF = 1/(2π√(ESL·C)) (standard circuit theory); derating: common practice",
             "valid below the parts' SRF; voltage sharing ignores leakage (DC) beyond balancing resistors");
 

@@ -1,5 +1,6 @@
 package org.tankwright.capacitors;
 
+import org.tankwright.provenance.Provenance;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
@@ -18,7 +19,7 @@ import java.util.List;
  * much larger than its resistance.
  */
 public final class Retune {
-    private static final Provenance PROVENANCE = new Provenance("ideal LC resonance; shorted-secondary coupling",
+    private static final Provenance PROVENANCE = Provenance.ranged("ideal LC resonance; shorted-secondary coupling",
             "ω² = 1/(LC); L1,short = L1(1 − k²) for a lossless shorted secondary (standard circuit theory)",
             "the measured frequency includes the capacitor ESL and coil self-capacitance; k needs ωL2 ≫ R2");
 

@@ -136,9 +136,10 @@ public record OperatingPoint(Topology topology, double frequency, Source source,
         boolean doubtful = false;
         if (source.isBridge() && q < MIN_LOADED_Q) {
             doubtful = true;
-            warnings.add(String.format(java.util.Locale.ROOT,
-                    "loaded Q %.3g is below %.0f: the current driven by a square wave is not close to a sine "
-                            + "(common practice), so the fundamental-harmonic result is approximate", q, MIN_LOADED_Q));
+            // plain concatenation, not String.format: this runs on every envelope point of a low-Q design
+            warnings.add("loaded Q " + Math.round(q * 100) / 100.0 + " is below " + Math.round(MIN_LOADED_Q)
+                    + ": the current driven by a square wave is not close to a sine "
+                    + "(common practice), so the fundamental-harmonic result is approximate");
         }
         if (mismatch != null || (source.isBridge() && !topology.primarySeries())) {
             doubtful = true;

@@ -277,7 +277,7 @@ public final class CoupleCommand implements Callable<Integer> {
         }
         m.put("model", any.provenance().model());
         m.put("source", any.provenance().source());
-        m.put("valid", any.provenance().withinValidity());
+        m.put("valid", any.provenance().valid());
         m.put("notes", any.provenance().notes());
         if (!sweep.isEmpty()) {
             List<Map<String, Object>> list = new ArrayList<>();
@@ -344,7 +344,7 @@ public final class CoupleCommand implements Callable<Integer> {
                     range.containsNull() ? "  — a coupling null lies inside the envelope" : "");
         }
         System.out.printf("%nmodel          %s%nsource         %s%nvalid          %s%n", any.provenance().model(), any.provenance().source(),
-                any.provenance().withinValidity() ? "yes" : "NO — see notes");
+                any.provenance().valid() ? "yes" : "NO — see notes");
         for (String note : any.provenance().notes()) {
             System.out.println("note           " + note);
         }

@@ -1,5 +1,6 @@
 package org.tankwright.coupling;
 
+import org.tankwright.provenance.Provenance;
 import org.apache.commons.math3.complex.Complex;
 import org.tankwright.magnetics.Filament;
 

@@ -1,5 +1,7 @@
 package org.tankwright.coupling;
 
+import org.tankwright.provenance.Provenance;
+
 /**
  * The coupling of two coils at one placement.
  *

@@ -1,5 +1,6 @@
 package org.tankwright.coupling;
 
+import org.tankwright.provenance.Provenance;
 import org.apache.commons.math3.analysis.integration.gauss.GaussIntegrator;
 import org.apache.commons.math3.analysis.integration.gauss.GaussIntegratorFactory;
 import org.tankwright.magnetics.Filament;

@@ -1,5 +1,6 @@
 package org.tankwright.heating;
 
+import org.tankwright.provenance.Provenance;
 import org.apache.commons.math3.complex.Complex;
 import org.tankwright.numerics.Kelvin;
 import org.tankwright.numerics.KelvinK;

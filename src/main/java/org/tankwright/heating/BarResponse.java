@@ -1,5 +1,7 @@
 package org.tankwright.heating;
 
+import org.tankwright.provenance.Provenance;
+
 /**
  * A round bar in a uniform axial field: the exact eddy-current solution per unit length.
  *

@@ -1,5 +1,7 @@
 package org.tankwright.heating;
 
+import org.tankwright.provenance.Provenance;
+
 /**
  * A work coil with its workpiece at one frequency and coil current, whatever the workpiece's shape:
  * the equivalent series resistance and inductance the tank sees and the field at the work's surface.

@@ -1,5 +1,6 @@
 package org.tankwright.heating;
 
+import org.tankwright.provenance.Provenance;
 import java.util.List;
 
 /**

@@ -1,5 +1,6 @@
 package org.tankwright.heating;
 
+import org.tankwright.provenance.Provenance;
 import org.tankwright.materials.WorkpieceMaterial;
 
 import java.util.List;

@@ -1,5 +1,7 @@
 package org.tankwright.heating;
 
+import org.tankwright.provenance.Provenance;
+
 /**
  * A flat work coil over its plate at one frequency and coil current.
  *

@@ -156,6 +156,6 @@ class CoupledCoilsTest {
         assertTrue(e.getMessage().contains("gap"));
         assertEquals(0.002, link.distanceForGap(0), 1e-15, "distance = gap + wire diameter for flat spirals");
         CouplingResult r = link.atGap(0.01, 0, 0);
-        assertTrue(r.provenance().withinValidity() && r.provenance().notes().isEmpty(), "air coils: no caveats");
+        assertTrue(r.provenance().valid() && r.provenance().notes().isEmpty(), "air coils: no caveats");
     }
 }

@@ -45,9 +45,9 @@ class ShieldLossTest {
         ShieldLoss.Result r = ShieldLoss.addedResistance(ring, 0, ALUMINIUM, 100e3);
         assertEquals(Math.sqrt(2.82e-8 / (Math.PI * 1e5 * Constants.MU0)), r.skinDepth(), 1e-15);
         assertEquals(2.82e-8 / r.skinDepth(), r.surfaceResistance(), 1e-15);
-        assertTrue(r.provenance().withinValidity());
+        assertTrue(r.provenance().valid());
         ShieldLoss.Result thin = ShieldLoss.addedResistance(ring, 0, BackingPlate.metal(2.82e-8, 0.0002, 0), 100e3);
-        assertFalse(thin.provenance().withinValidity(), "thinner than 3 skin depths");
+        assertFalse(thin.provenance().valid(), "thinner than 3 skin depths");
     }
 
     @Test
