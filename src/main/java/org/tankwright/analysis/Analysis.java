@@ -29,6 +29,19 @@ public final class Analysis {
     private Analysis() {
     }
 
+    /**
+     * Gives up when the thread running the analysis is interrupted: a window that recomputes on
+     * every edit interrupts the analysis of an edit it no longer needs. Checked between stages and
+     * inside the envelope's grid; the interrupt flag is left set for the caller.
+     *
+     * @throws java.util.concurrent.CancellationException when interrupted
+     */
+    static void stopIfInterrupted() {
+        if (Thread.currentThread().isInterrupted()) {
+            throw new java.util.concurrent.CancellationException("analysis interrupted");
+        }
+    }
+
     /** Analyses a design completely. */
     public static AnalysisResult run(Design design) {
         return run(design, Scope.FULL);
@@ -38,6 +51,7 @@ public final class Analysis {
      * Analyses a design.
      *
      * @throws AnalysisException when the design cannot be analysed (the message names the field)
+     * @throws java.util.concurrent.CancellationException when the calling thread is interrupted meanwhile
      */
     public static AnalysisResult run(Design d, Scope scope) {
         long t0 = System.nanoTime();
@@ -63,12 +77,15 @@ public final class Analysis {
             coils.add(secondary.report());
             linked = CouplingStage.couple(d, primary, secondary, full);
             coupling = linked.report();
+            stopIfInterrupted();
             LinkValues values = new LinkValues(coupling.l1(), coupling.l2(), coupling.mutual(),
                     primary.report().resistanceAc(), secondary.report().resistanceAc());
             tuned = firstTuning(d, NetworkStage.linkDesign(d, f, values, fixed(d.compensation().c1()),
                     fixed(d.compensation().c2())));
             // Banks are sized for the worst stress over the envelope when it is solved, else for the operating point.
+            stopIfInterrupted();
             EnvelopeReport first = full && EnvelopeStage.applies(d) ? EnvelopeStage.link(d, tuned, linked) : null;
+            stopIfInterrupted();
             tuned = withBanks(d, tuned, first, banks, notes, full);
         } else {
             LinkValues values = LinkValues.tank(primary.report().inductance(), primary.report().resistanceAc());
@@ -86,7 +103,9 @@ public final class Analysis {
                 notes.add("heater solved again with the chosen bank's real capacitance, ESR and ESL");
             }
         }
+        stopIfInterrupted();
         NetworkReport network = NetworkStage.report(tuned, full);
+        stopIfInterrupted();
         EnvelopeReport envelope = full && EnvelopeStage.applies(d) ? EnvelopeStage.link(d, tuned, linked)
                 : heated != null ? EnvelopeStage.heater(heated, d) : null;
         OperatingPoint op = tuned.operatingPoint();

@@ -100,6 +100,10 @@ public final class OperatingEnvelope {
         List<String> warnings = new ArrayList<>();
         for (int a = 0; a < nc; a++) {
             for (int b = 0; b < nl; b++) {
+                if (Thread.currentThread().isInterrupted()) {
+                    // the caller (a window recomputing on each edit) no longer wants this result
+                    throw new java.util.concurrent.CancellationException("envelope solve interrupted");
+                }
                 for (int c = 0; c < nf; c++) {
                     for (int e = 0; e < nt; e++) {
                         for (int o = 0; o < no; o++) {
