@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import javax.swing.JTabbedPane;
 import javax.swing.UIManager;
+import org.tankwright.analysis.AnalysisResult;
 import org.tankwright.charts.ChartStyle;
 import org.tankwright.charts.Figure;
 import org.tankwright.charts.ResultFigures;
@@ -21,6 +22,9 @@ public final class PlotsPane extends ResultPane {
     private final ToleranceTab tolerance;
     private final javax.swing.JComboBox<Object> compare = new javax.swing.JComboBox<>();
     private final Workspace workspace;
+    /** What each figure tab shows now; a tab is built only when it is the one shown (the others wait until picked). */
+    private final List<Object> builtFor = new ArrayList<>();
+    private Object wanted;
     private boolean refilling;
     private static final String NONE = "(no comparison)";
 
@@ -31,8 +35,10 @@ public final class PlotsPane extends ResultPane {
         for (String title : ResultFigures.TITLES.subList(0, TOLERANCE)) {
             FigureView v = new FigureView("plot " + title);
             views.add(v);
+            builtFor.add(null);
             tabs.addTab(title, v);
         }
+        tabs.addChangeListener(e -> buildShownTab());
         tolerance = new ToleranceTab(() -> workspace.selected() == null ? null : workspace.selected().result());
         tabs.addTab(ResultFigures.TITLES.get(TOLERANCE), tolerance);
         compare.setName("compareWith");
@@ -109,12 +115,23 @@ public final class PlotsPane extends ResultPane {
 
     private void showFigures(OpenDesign d) {
         OpenDesign other = d == null ? null : comparison(d);
-        List<Figure> figures = d == null || d.result() == null ? null : ResultFigures.all(d.result(),
-                other == null ? null : other.result(), ChartStyle.fromLookAndFeel());
-        for (int i = 0; i < views.size(); i++) {
-            String title = ResultFigures.TITLES.get(i);
-            views.get(i).show(figures != null ? figures.get(i)
-                    : Figure.missing(title, d == null ? "No design open." : "Computing…"));
+        AnalysisResult r = d == null ? null : d.result();
+        wanted = new Wanted(d, r, other == null ? null : other.result(), ChartStyle.fromLookAndFeel());
+        buildShownTab();
+    }
+
+    /** What the figure tabs are to show: a design's result, the one compared with it, the style. */
+    private record Wanted(OpenDesign design, AnalysisResult result, AnalysisResult other, ChartStyle style) {
+    }
+
+    /** Builds the shown figure tab when it does not show what is wanted yet. */
+    private void buildShownTab() {
+        int i = tabs.getSelectedIndex();
+        if (i < 0 || i >= views.size() || !(wanted instanceof Wanted w) || builtFor.get(i) == w) {
+            return;
         }
+        builtFor.set(i, w);
+        views.get(i).show(w.result() != null ? ResultFigures.one(i, w.result(), w.other(), w.style())
+                : Figure.missing(ResultFigures.TITLES.get(i), w.design() == null ? "No design open." : "Computing…"));
     }
 }
