@@ -18,8 +18,11 @@ import javax.swing.SwingUtilities;
  */
 public final class LatestWins<I, O> implements AutoCloseable {
 
-    /** What one request came to: its input, output or failure, and the time the computation took. */
-    public record Outcome<I, O>(I input, O output, Throwable failure, long nanos) {
+    /**
+     * What one request came to: its input, output or failure, the time the computation took, and
+     * whether it is the quick preview (the full result follows) or the final one.
+     */
+    public record Outcome<I, O>(I input, O output, Throwable failure, long nanos, boolean preview) {
         public boolean succeeded() {
             return failure == null;
         }
@@ -76,15 +79,15 @@ public final class LatestWins<I, O> implements AutoCloseable {
             return; // superseded before it started
         }
         if (preview != null) {
-            compute(preview, input, generation);
+            compute(preview, input, generation, true);
             if (!isCurrent(generation)) {
                 return; // superseded while the preview ran
             }
         }
-        compute(computation, input, generation);
+        compute(computation, input, generation, false);
     }
 
-    private void compute(Function<I, O> f, I input, long generation) {
+    private void compute(Function<I, O> f, I input, long generation, boolean isPreview) {
         long t0 = System.nanoTime();
         O output = null;
         Throwable failure = null;
@@ -98,7 +101,7 @@ public final class LatestWins<I, O> implements AutoCloseable {
             running = null;
             Thread.interrupted(); // a cancel aimed at this request must not reach the next one
         }
-        Outcome<I, O> outcome = new Outcome<>(input, output, failure, System.nanoTime() - t0);
+        Outcome<I, O> outcome = new Outcome<>(input, output, failure, System.nanoTime() - t0, isPreview);
         SwingUtilities.invokeLater(() -> {
             if (isCurrent(generation)) {
                 publisher.accept(outcome);

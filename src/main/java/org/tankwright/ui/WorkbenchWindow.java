@@ -124,6 +124,8 @@ public final class WorkbenchWindow {
                 if (d == workspace.selected()) {
                     if (d.failure() != null) {
                         status.failed(d.failure());
+                    } else if (d.isPreview()) {
+                        status.previewShown(d.computeNanos());
                     } else {
                         status.computed(d.computeNanos());
                     }

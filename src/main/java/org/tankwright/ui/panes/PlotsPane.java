@@ -77,6 +77,9 @@ public final class PlotsPane extends ResultPane {
 
     @Override
     protected void show(OpenDesign d) {
+        if (d != null && d.isPreview() && wanted instanceof Wanted w && w.design() == d && w.result() != null) {
+            return; // an edit's operating point has no sweeps: keep the last curves until its full result comes
+        }
         tolerance.resultChanged();
         showFigures(d);
     }
