@@ -48,13 +48,13 @@ public final class PlotsPane extends ResultPane {
                 showFigures(workspace.selected());
             }
         });
-        javax.swing.JPanel bar = new javax.swing.JPanel(new java.awt.FlowLayout(java.awt.FlowLayout.LEFT, 6, 2));
+        javax.swing.JPanel bar = new javax.swing.JPanel(new java.awt.FlowLayout(java.awt.FlowLayout.RIGHT, 6, 0));
+        bar.setOpaque(false);
         bar.add(new javax.swing.JLabel("Compare with:"));
         bar.add(compare);
-        javax.swing.JPanel content = new javax.swing.JPanel(new java.awt.BorderLayout());
-        content.add(bar, java.awt.BorderLayout.NORTH);
-        content.add(tabs, java.awt.BorderLayout.CENTER);
-        add(content);
+        // beside the figure tabs, not above them: the height goes to the curves
+        tabs.putClientProperty(com.formdev.flatlaf.FlatClientProperties.TABBED_PANE_TRAILING_COMPONENT, bar);
+        add(tabs);
         this.workspace = workspace;
         UIManager.addPropertyChangeListener(e -> {
             if ("lookAndFeel".equals(e.getPropertyName())) {
