@@ -80,11 +80,30 @@ public final class LatestWins<I, O> implements AutoCloseable {
         }
         if (preview != null) {
             compute(preview, input, generation, true);
+            awaitShown(PREVIEW_SHOWN_WAIT_MS);
             if (!isCurrent(generation)) {
                 return; // superseded while the preview ran
             }
         }
         compute(computation, input, generation, false);
+    }
+
+    /**
+     * Longest wait for the preview to be shown before the full computation starts. The full
+     * computation uses every core (its sweeps run in parallel); started at once it would take the
+     * processors from the event thread while that hands the preview to the panes and paints it.
+     */
+    static final long PREVIEW_SHOWN_WAIT_MS = 250;
+
+    /** Waits (at most {@code ms}) until the event thread has handled what is queued now, and the paints that queues. */
+    private static void awaitShown(long ms) {
+        java.util.concurrent.CountDownLatch shown = new java.util.concurrent.CountDownLatch(1);
+        SwingUtilities.invokeLater(() -> SwingUtilities.invokeLater(shown::countDown));
+        try {
+            shown.await(ms, java.util.concurrent.TimeUnit.MILLISECONDS);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
     }
 
     private void compute(Function<I, O> f, I input, long generation, boolean isPreview) {
