@@ -36,7 +36,8 @@ import java.util.function.Consumer;
 public final class BenchRun {
     /** The items of the report, in order. */
     public enum Item {
-        SOLVE("solve"), SWEEP("sweep"), COUPLING("coupling"), TOLERANCE("tolerance"), BANKS("banks"), WINDOW("window");
+        SOLVE("solve"), SWEEP("sweep"), COUPLING("coupling"), TOLERANCE("tolerance"), BANKS("banks"), WINDOW("window"),
+        EDIT("edit");
 
         private final String key;
 
@@ -56,13 +57,43 @@ public final class BenchRun {
                     return i;
                 }
             }
-            throw new IllegalArgumentException("unknown bench item '" + key + "'; allowed: solve, sweep, coupling, tolerance, banks, window");
+            throw new IllegalArgumentException("unknown bench item '" + key + "'; allowed: solve, sweep, coupling, tolerance, banks, window, edit");
         }
     }
 
     static final double OPERATING_POINT_TARGET_MS = 5;
     static final double ENVELOPE_TARGET_MS = 1000;
     static final double WINDOW_TARGET_S = 2.5;
+    static final double EDIT_OPERATING_TARGET_MS = 50;
+    static final double EDIT_FULL_TARGET_MS = 1000;
+    /** The presets the edit item opens. */
+    static final List<String> EDIT_PRESETS = List.of(Presets.DEMO, "warehouse-robot-pad");
+
+    /**
+     * Times geometry edits in a workbench window in this JVM (the window face provides it: this
+     * package knows no window).
+     */
+    public interface WindowEdits {
+        /**
+         * Opens each preset in a window and times {@code runs} edits after {@code warmups}; throws
+         * {@link IllegalStateException} with the reason when it cannot (no display).
+         */
+        List<EditTimes> measure(List<String> presets, int warmups, int runs) throws Exception;
+    }
+
+    /**
+     * One preset's edit times.
+     *
+     * @param preset      the preset
+     * @param edit        the edit made, in words
+     * @param operatingMs per timed edit: edit to its operating point painted in every pane, ms
+     * @param fullMs      per timed edit: edit to its full result (sweeps, envelope) painted, ms
+     * @param warmups     untimed edits before
+     */
+    public record EditTimes(String preset, String edit, double[] operatingMs, double[] fullMs, int warmups) {
+    }
+
+    private WindowEdits windowEdits;
     static final int SWEEP_POINTS = 2000;
     static final int TOLERANCE_SAMPLES = 10_000;
 
@@ -79,6 +110,12 @@ public final class BenchRun {
         this.quick = quick;
         this.items = items.isEmpty() ? EnumSet.allOf(Item.class) : EnumSet.copyOf(items);
         this.progress = progress;
+    }
+
+    /** Sets how the edit item opens a window (without it, the item says it was skipped). */
+    public BenchRun withWindowEdits(WindowEdits w) {
+        this.windowEdits = w;
+        return this;
     }
 
     /** Runs the chosen items and returns the report. */
@@ -109,6 +146,9 @@ public final class BenchRun {
         }
         if (items.contains(Item.WINDOW)) {
             window(md);
+        }
+        if (items.contains(Item.EDIT)) {
+            edit(md);
         }
         double end = java.lang.management.ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage();
         md.append("## Load during the run\n\n");
@@ -291,9 +331,69 @@ public final class BenchRun {
         md.append("| item | median | fastest | slowest | target met (median) |\n|---|---:|---:|---:|---|\n");
         md.append("| window start to first painted result | ").append(sec(w.median())).append(" | ").append(sec(w.min())).append(" | ")
                 .append(sec(w.max())).append(" | ").append(w.median() < WINDOW_TARGET_S ? "yes" : "no").append(" |\n\n");
-        md.append(w.runs()).append(" launches (the first one also warms the disk cache). Display: `").append(w.display())
-                .append("`. For scale, a child JVM that only prints the version takes ").append(sec(w.jvmOnly()))
-                .append(" (median): the rest is loading the window classes and the first, not yet compiled, analysis of the demo.\n\n");
+        md.append(w.runs()).append(" timed launches after one untimed launch that warms the disk cache. Started ").append(w.how())
+                .append(". Display: `").append(w.display())
+                .append("`. For scale, the same launch that only prints the version takes ").append(sec(w.jvmOnly()))
+                .append(" (median): the rest is loading the window classes, building and painting the window, and the first, "
+                        + "not yet compiled, analysis of the demo (started on its own thread at the top of `main`, so it overlaps the window's building).\n\n");
+    }
+
+    private void edit(StringBuilder md) {
+        progress.accept("edits in the window");
+        md.append("## Edit to result in the window\n\n");
+        md.append("A workbench window opened in the bench's own JVM at the default size (").append(DEFAULT_WINDOW)
+                .append(") on each preset, with the interactive pipeline (operating point first, then the full analysis, latest edit wins). "
+                        + "The primary coil's turns are changed back and forth through the editor's own text field (select all, "
+                        + "type the new number over it: the path a keystroke takes). Timed on the event thread from the change "
+                        + "of the text to (a) its operating-point result handed to every pane and painted, and (b) its full "
+                        + "result (sweeps, envelope) handed to the plots and painted. Targets: (a) under ")
+                .append(fmt(EDIT_OPERATING_TARGET_MS)).append(" ms, (b) under ").append(fmt(EDIT_FULL_TARGET_MS)).append(" ms, never blocking the window.\n\n");
+        int warm = quick ? 3 : 20;
+        int runs = quick ? 3 : 15;
+        List<EditTimes> times;
+        try {
+            if (windowEdits == null) {
+                throw new IllegalStateException("this run has no window (the bench was not started from the command line)");
+            }
+            times = windowEdits.measure(EDIT_PRESETS, warm, runs);
+        } catch (IllegalStateException e) {
+            md.append("Skipped: ").append(e.getMessage())
+                    .append(". Run the bench under a display, e.g. `xvfb-run -a ./tankwright bench --only edit`.\n\n");
+            return;
+        } catch (Exception e) {
+            md.append("Skipped: the window could not be opened: ").append(e).append("\n\n");
+            return;
+        }
+        md.append("| preset | edit | (a) operating point: median | fastest | slowest | (b) full result: median | fastest | slowest | targets met (medians) |\n");
+        md.append("|---|---|---:|---:|---:|---:|---:|---:|---|\n");
+        for (EditTimes t : times) {
+            double a = Timing.median(t.operatingMs());
+            double b = Timing.median(t.fullMs());
+            md.append("| ").append(t.preset()).append(" | ").append(t.edit()).append(" | ").append(ms(a)).append(" | ")
+                    .append(ms(min(t.operatingMs()))).append(" | ").append(ms(max(t.operatingMs()))).append(" | ")
+                    .append(ms(b)).append(" | ").append(ms(min(t.fullMs()))).append(" | ").append(ms(max(t.fullMs()))).append(" | ")
+                    .append(a < EDIT_OPERATING_TARGET_MS ? "yes" : "no").append(", ").append(b < EDIT_FULL_TARGET_MS ? "yes" : "no")
+                    .append(" |\n");
+        }
+        md.append("\nEach preset: ").append(runs).append(" timed edits after ").append(warm).append(" untimed ones.\n\n");
+    }
+
+    private static final String DEFAULT_WINDOW = "1440 × 900";
+
+    private static double min(double[] v) {
+        double m = Double.POSITIVE_INFINITY;
+        for (double x : v) {
+            m = Math.min(m, x);
+        }
+        return m;
+    }
+
+    private static double max(double[] v) {
+        double m = Double.NEGATIVE_INFINITY;
+        for (double x : v) {
+            m = Math.max(m, x);
+        }
+        return m;
     }
 
     /** Writes the report to a file (creating folders). */

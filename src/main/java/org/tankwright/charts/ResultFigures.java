@@ -35,6 +35,41 @@ public final class ResultFigures {
      * variant; may be null) are overlaid for comparison, their curves named after that design.
      */
     public static List<Figure> all(AnalysisResult r, AnalysisResult other, ChartStyle style) {
+        List<Figure> out = new ArrayList<>();
+        for (int i = 0; i < TITLES.size(); i++) {
+            out.add(one(i, r, other, style));
+        }
+        return out;
+    }
+
+    /**
+     * The figure at {@code index} of {@link #TITLES} alone (the window builds only the tab it
+     * shows), with {@code other}'s frequency sweeps overlaid as in {@link #all(AnalysisResult, AnalysisResult, ChartStyle)}.
+     */
+    public static Figure one(int index, AnalysisResult r, AnalysisResult other, ChartStyle style) {
+        String title = TITLES.get(index);
+        return switch (index) {
+            case 0 -> twoAxes(title, frequencySweeps(r, other), s -> s.yDim() == Dimension.RESISTANCE,
+                    s -> s.yDim() == Dimension.ANGLE, operatingFrequency(r), style,
+                    "the result holds no impedance sweep against frequency.");
+            case 1 -> twoAxes(title, frequencySweeps(r, other), s -> s.yDim() == Dimension.POWER,
+                    s -> s.yDim() == Dimension.FRACTION, operatingFrequency(r), style,
+                    "the result holds no power or efficiency sweep against frequency.");
+            case 2 -> lines(title, frequencySweeps(r, other), s -> s.yDim() == Dimension.VOLTAGE, operatingFrequency(r), style,
+                    "the result holds no capacitor-voltage sweep against frequency.");
+            case 3 -> coupling(r, style);
+            case 4 -> envelope(r, style);
+            case 5 -> Figure.missing(title, NOT_COMPUTED + "the analysis result does not carry tolerance-study samples yet.");
+            default -> throw new IndexOutOfBoundsException("figure " + index + " of " + TITLES.size());
+        };
+    }
+
+    private static double operatingFrequency(AnalysisResult r) {
+        return r.network() != null ? r.network().frequency() : r.design().frequency();
+    }
+
+    /** {@code r}'s sweeps against frequency, then {@code other}'s (may be null), named after its design. */
+    private static List<Series> frequencySweeps(AnalysisResult r, AnalysisResult other) {
         List<Series> frequency = new ArrayList<>(frequencySweeps(r));
         if (other != null) {
             for (Series s : frequencySweeps(other)) {
@@ -42,18 +77,7 @@ public final class ResultFigures {
                         s.xDim(), s.yLabel(), s.yDim(), s.x(), s.y(), Double.NaN));
             }
         }
-        double op = r.network() != null ? r.network().frequency() : r.design().frequency();
-        List<Figure> out = new ArrayList<>();
-        out.add(twoAxes(TITLES.get(0), frequency, s -> s.yDim() == Dimension.RESISTANCE, s -> s.yDim() == Dimension.ANGLE, op, style,
-                "the result holds no impedance sweep against frequency."));
-        out.add(twoAxes(TITLES.get(1), frequency, s -> s.yDim() == Dimension.POWER, s -> s.yDim() == Dimension.FRACTION, op, style,
-                "the result holds no power or efficiency sweep against frequency."));
-        out.add(lines(TITLES.get(2), frequency, s -> s.yDim() == Dimension.VOLTAGE, op, style,
-                "the result holds no capacitor-voltage sweep against frequency."));
-        out.add(coupling(r, style));
-        out.add(envelope(r, style));
-        out.add(Figure.missing(TITLES.get(5), NOT_COMPUTED + "the analysis result does not carry tolerance-study samples yet."));
-        return out;
+        return frequency;
     }
 
     private static List<Series> frequencySweeps(AnalysisResult r) {

@@ -5,7 +5,6 @@ import java.awt.Color;
 import java.awt.Font;
 import java.util.List;
 import org.jfree.chart.JFreeChart;
-import org.jfree.chart.axis.LogAxis;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.plot.ValueMarker;
@@ -24,13 +23,10 @@ public final class XYFigures {
     private XYFigures() {
     }
 
-    /** An axis for quantity {@code dim}, logarithmic when asked; ticks through the one formatter. */
+    /** An axis for quantity {@code dim}, logarithmic (ticks on round values, see {@link DecadeLogAxis}) when asked; ticks through the one formatter. */
     public static ValueAxis axis(String label, Dimension dim, boolean log) {
         if (log) {
-            LogAxis a = new LogAxis(label);
-            a.setNumberFormatOverride(new EngineeringFormat(dim, 3));
-            a.setSmallestValue(1e-30);
-            return a;
+            return new DecadeLogAxis(label, dim);
         }
         NumberAxis a = new NumberAxis(label);
         a.setNumberFormatOverride(new EngineeringFormat(dim, 3));
@@ -93,6 +89,7 @@ public final class XYFigures {
     private static XYLineAndShapeRenderer renderer() {
         XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, false);
         r.setDefaultToolTipGenerator(null);
+        r.setDrawSeriesLineAsPath(true); // one path per curve, not a line per pair of points: sweeps have thousands
         return r;
     }
 

@@ -29,6 +29,8 @@ import picocli.CommandLine.Command;
 public final class Main implements Runnable {
 
     public static void main(String[] args) {
+        org.tankwright.ui.StartTrace.mark("main");
+        WindowHeadStart.begin(args);
         System.exit(run(args));
     }
 

@@ -1,9 +1,9 @@
 package org.tankwright.cli;
 
-import org.tankwright.analysis.Analysis;
 import org.tankwright.analysis.Presets;
 import org.tankwright.analysis.Summary;
 import org.tankwright.design.Design;
+import org.tankwright.ui.HeadStart;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -35,29 +35,33 @@ public final class OpenCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Design design = file == null ? Presets.demo() : DesignArgs.load(file);
-        org.tankwright.ui.Workbench.Options opts = WorkbenchOptions.parse(theme, size, snapshot);
+        org.tankwright.ui.StartTrace.mark("command line parsed");
+        HeadStart head = WindowHeadStart.current();
+        Design early = head == null ? null : head.design(file);
+        Design design = early != null ? early : file == null ? Presets.demo() : DesignArgs.load(file);
+        org.tankwright.ui.Workbench.Options opts = WorkbenchOptions.parse(theme, size, snapshot)
+                .withHeadStart(early != null ? head : null);
         if (snapshot != null) {
             return WorkbenchOptions.snapshot(file, design, opts);
         }
         if (GraphicsEnvironment.isHeadless()) {
-            return printSummary(design, "No display is available");
+            return printSummary(design, opts, "No display is available");
         }
         try {
             org.tankwright.ui.Workbench.launch(file, design, opts);
         } catch (java.io.IOException e) {
             throw new ExitCodes.UserError(ExitCodes.INVALID_INPUT, e.getMessage());
         } catch (java.awt.AWTError | java.awt.HeadlessException | UnsatisfiedLinkError e) {
-            return printSummary(design, "The display cannot be opened (" + e.getMessage() + ")");
+            return printSummary(design, opts, "The display cannot be opened (" + e.getMessage() + ")");
         }
         return ExitCodes.OK;
     }
 
-    private static int printSummary(Design design, String why) {
+    private static int printSummary(Design design, org.tankwright.ui.Workbench.Options opts, String why) {
         System.out.println(why + ", so the workbench window cannot open."
                 + " Here is the solved summary of \"" + design.name() + "\" instead.");
         System.out.println();
-        System.out.print(Summary.text(Analysis.run(design)));
+        System.out.print(Summary.text(opts.fullAnalysis().apply(design)));
         return ExitCodes.OK;
     }
 }

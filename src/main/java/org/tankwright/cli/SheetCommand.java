@@ -5,6 +5,7 @@ import org.tankwright.analysis.AnalysisResult;
 import org.tankwright.report.Paper;
 import org.tankwright.report.SheetInfo;
 import org.tankwright.report.TuningSheet;
+import org.tankwright.report.Version;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -39,7 +40,7 @@ public final class SheetCommand implements Callable<Integer> {
         }
         AnalysisResult r = Analysis.run(DesignArgs.load(file));
         try {
-            TuningSheet.write(r, output, p, SheetInfo.today(file.getFileName().toString(), VersionInfo.version()));
+            TuningSheet.write(r, output, p, SheetInfo.today(file.getFileName().toString(), Version.get()));
         } catch (IOException e) {
             throw new ExitCodes.UserError(ExitCodes.INVALID_INPUT, output + ": cannot be written: " + e.getMessage());
         }

@@ -1,17 +1,12 @@
 package org.tankwright.cli;
 
+import org.tankwright.report.Version;
 import picocli.CommandLine;
 
-/** The version printed by {@code --version}: the jar's Implementation-Version, or "dev" when run from classes. */
+/** What {@code --version} prints: the program's {@link Version} and the Java it runs on. */
 public final class VersionInfo implements CommandLine.IVersionProvider {
-    /** The tool's version string. */
-    public static String version() {
-        String v = Main.class.getPackage().getImplementationVersion();
-        return v == null ? "dev" : v;
-    }
-
     @Override
     public String[] getVersion() {
-        return new String[] {"tankwright " + version(), "Java " + System.getProperty("java.version")};
+        return new String[] {"tankwright " + Version.get(), "Java " + System.getProperty("java.version")};
     }
 }

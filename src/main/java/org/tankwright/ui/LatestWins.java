@@ -18,8 +18,11 @@ import javax.swing.SwingUtilities;
  */
 public final class LatestWins<I, O> implements AutoCloseable {
 
-    /** What one request came to: its input, output or failure, and the time the computation took. */
-    public record Outcome<I, O>(I input, O output, Throwable failure, long nanos) {
+    /**
+     * What one request came to: its input, output or failure, the time the computation took, and
+     * whether it is the quick preview (the full result follows) or the final one.
+     */
+    public record Outcome<I, O>(I input, O output, Throwable failure, long nanos, boolean preview) {
         public boolean succeeded() {
             return failure == null;
         }
@@ -76,15 +79,34 @@ public final class LatestWins<I, O> implements AutoCloseable {
             return; // superseded before it started
         }
         if (preview != null) {
-            compute(preview, input, generation);
+            compute(preview, input, generation, true);
+            awaitShown(PREVIEW_SHOWN_WAIT_MS);
             if (!isCurrent(generation)) {
                 return; // superseded while the preview ran
             }
         }
-        compute(computation, input, generation);
+        compute(computation, input, generation, false);
     }
 
-    private void compute(Function<I, O> f, I input, long generation) {
+    /**
+     * Longest wait for the preview to be shown before the full computation starts. The full
+     * computation uses every core (its sweeps run in parallel); started at once it would take the
+     * processors from the event thread while that hands the preview to the panes and paints it.
+     */
+    static final long PREVIEW_SHOWN_WAIT_MS = 250;
+
+    /** Waits (at most {@code ms}) until the event thread has handled what is queued now, and the paints that queues. */
+    private static void awaitShown(long ms) {
+        java.util.concurrent.CountDownLatch shown = new java.util.concurrent.CountDownLatch(1);
+        SwingUtilities.invokeLater(() -> SwingUtilities.invokeLater(shown::countDown));
+        try {
+            shown.await(ms, java.util.concurrent.TimeUnit.MILLISECONDS);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+    }
+
+    private void compute(Function<I, O> f, I input, long generation, boolean isPreview) {
         long t0 = System.nanoTime();
         O output = null;
         Throwable failure = null;
@@ -98,7 +120,7 @@ public final class LatestWins<I, O> implements AutoCloseable {
             running = null;
             Thread.interrupted(); // a cancel aimed at this request must not reach the next one
         }
-        Outcome<I, O> outcome = new Outcome<>(input, output, failure, System.nanoTime() - t0);
+        Outcome<I, O> outcome = new Outcome<>(input, output, failure, System.nanoTime() - t0, isPreview);
         SwingUtilities.invokeLater(() -> {
             if (isCurrent(generation)) {
                 publisher.accept(outcome);

@@ -68,6 +68,12 @@ public final class StatusBar extends JPanel {
         state.setText(String.format(Locale.ROOT, "Computed in %.1f ms", nanos / 1e6));
     }
 
+    /** An edit's operating point is shown; its sweeps and envelope are still being computed. */
+    public void previewShown(long nanos) {
+        showBusy(true);
+        state.setText(String.format(Locale.ROOT, "Operating point in %.1f ms · computing the sweeps and the envelope…", nanos / 1e6));
+    }
+
     /** The last computation failed. */
     public void failed(String message) {
         showBusy(false);

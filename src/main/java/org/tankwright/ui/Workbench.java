@@ -21,17 +21,24 @@ import org.tankwright.ui.model.Workspace;
 /** The workbench window's entry point, called by {@code tankwright open}. */
 public final class Workbench {
     /** The interactive pipeline: the operating point first, then the full analysis. */
-    static final org.tankwright.ui.model.Progressive PROGRESSIVE = new org.tankwright.ui.model.Progressive() {
-        @Override
-        public AnalysisResult apply(Design d) {
-            return Analysis.run(d);
-        }
+    static final org.tankwright.ui.model.Progressive PROGRESSIVE = progressive(
+            d -> Analysis.run(d, Analysis.Scope.OPERATING_POINT), Analysis::run);
 
-        @Override
-        public AnalysisResult preview(Design d) {
-            return Analysis.run(d, Analysis.Scope.OPERATING_POINT);
-        }
-    };
+    /** A progressive pipeline of a {@code preview} and a {@code full} computation. */
+    static org.tankwright.ui.model.Progressive progressive(Function<Design, AnalysisResult> preview,
+                                                         Function<Design, AnalysisResult> full) {
+        return new org.tankwright.ui.model.Progressive() {
+            @Override
+            public AnalysisResult apply(Design d) {
+                return full.apply(d);
+            }
+
+            @Override
+            public AnalysisResult preview(Design d) {
+                return preview.apply(d);
+            }
+        };
+    }
 
 
     /** Default window size. */
@@ -43,9 +50,33 @@ public final class Workbench {
      * @param theme    light or dark; null uses the remembered one
      * @param snapshot when set, lay the window out, wait for the analysis, write a PNG here and close
      * @param size     window size; null for {@link #DEFAULT_SIZE}
+     * @param headStart the design's analysis already started at the top of {@code main}, or null
      */
-    public record Options(Theme theme, Path snapshot, Dimension size) {
+    public record Options(Theme theme, Path snapshot, Dimension size, HeadStart headStart) {
         public static final Options DEFAULT = new Options(null, null, null);
+
+        /** Options without a head start. */
+        public Options(Theme theme, Path snapshot, Dimension size) {
+            this(theme, snapshot, size, null);
+        }
+
+        /** These options with {@code h} as the head start. */
+        public Options withHeadStart(HeadStart h) {
+            return new Options(theme, snapshot, size, h);
+        }
+
+        /** The full analysis, answered from the head start for its design. */
+        public Function<Design, AnalysisResult> fullAnalysis() {
+            Function<Design, AnalysisResult> f = Analysis::run;
+            return headStart == null ? f : headStart.serve(Analysis.Scope.FULL, f);
+        }
+
+        org.tankwright.ui.model.Progressive progressiveAnalysis() {
+            if (headStart == null) {
+                return PROGRESSIVE;
+            }
+            return progressive(headStart.serve(Analysis.Scope.OPERATING_POINT, PROGRESSIVE::preview), fullAnalysis());
+        }
 
         Dimension sizeOrDefault() {
             return size != null ? size : DEFAULT_SIZE;
@@ -73,16 +104,23 @@ public final class Workbench {
     public static int launch(Path file, Design design, Options opts) throws IOException {
         UserSettings settings = new UserSettings(UserSettings.defaultFolder());
         if (opts.snapshot() != null) {
+            CountDownLatch disposed = new CountDownLatch(1);
             BufferedImage img = snapshot(design, file, opts.theme() != null ? opts.theme() : Theme.LIGHT,
-                    opts.sizeOrDefault(), Analysis::run);
-            Snapshot.writePng(img, opts.snapshot());
+                    opts.sizeOrDefault(), opts.fullAnalysis(), disposed);
+            Snapshot.writePng(img, opts.snapshot()); // while the event thread closes the window
+            StartTrace.mark("snapshot written");
+            try {
+                disposed.await(60, TimeUnit.SECONDS);
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+            }
             return 0;
         }
         CountDownLatch closed = new CountDownLatch(1);
         onEdt(() -> {
             Theme theme = opts.theme() != null ? opts.theme() : settings.theme();
             theme.install();
-            WorkbenchWindow w = new WorkbenchWindow(settings, PROGRESSIVE, WorkbenchWindow.Mode.INTERACTIVE);
+            WorkbenchWindow w = new WorkbenchWindow(settings, opts.progressiveAnalysis(), WorkbenchWindow.Mode.INTERACTIVE);
             w.frame().addWindowListener(new java.awt.event.WindowAdapter() {
                 @Override
                 public void windowClosed(java.awt.event.WindowEvent e) {
@@ -110,21 +148,33 @@ public final class Workbench {
      */
     public static BufferedImage snapshot(Design design, Path file, Theme theme, Dimension size,
                                          Function<Design, AnalysisResult> analysis) throws IOException {
+        return snapshot(design, file, theme, size, analysis, null);
+    }
+
+    /** As above; with {@code disposed} set, the window is closed later on the event thread, which counts it down when done. */
+    private static BufferedImage snapshot(Design design, Path file, Theme theme, Dimension size,
+                                          Function<Design, AnalysisResult> analysis, CountDownLatch disposed) throws IOException {
         CountDownLatch shown = new CountDownLatch(1);
         WorkbenchWindow[] window = new WorkbenchWindow[1];
         onEdt(() -> {
+            StartTrace.mark("event thread running");
             theme.install();
+            StartTrace.mark("look and feel installed");
             WorkbenchWindow w = new WorkbenchWindow(new UserSettings(UserSettings.defaultFolder()), analysis,
                     WorkbenchWindow.Mode.SNAPSHOT);
+            StartTrace.mark("window built");
             window[0] = w;
             w.workspace().addListener(new Workspace.Listener() {
                 @Override
                 public void resultShown(OpenDesign d) {
+                    StartTrace.mark("result handed to the panes");
                     shown.countDown();
                 }
             });
             w.show(size);
+            StartTrace.mark("window shown");
             w.workspace().open(design, file == null ? null : file.toAbsolutePath().normalize());
+            StartTrace.mark("design opened");
         });
         try {
             if (!shown.await(60, TimeUnit.SECONDS)) {
@@ -138,17 +188,29 @@ public final class Workbench {
                 window[0].frame().invalidate();
                 window[0].frame().validate();
                 img[0] = Snapshot.capture(window[0].frame());
+                StartTrace.mark("window painted into the snapshot");
             });
             return img[0];
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
             throw new IOException("interrupted while waiting for the analysis", e);
         } finally {
-            onEdt(() -> {
+            Runnable close = () -> {
                 if (window[0] != null) {
                     window[0].dispose();
                 }
-            });
+            };
+            if (disposed == null) {
+                onEdt(close);
+            } else {
+                SwingUtilities.invokeLater(() -> {
+                    try {
+                        close.run();
+                    } finally {
+                        disposed.countDown();
+                    }
+                });
+            }
         }
     }
 

@@ -124,6 +124,8 @@ public final class WorkbenchWindow {
                 if (d == workspace.selected()) {
                     if (d.failure() != null) {
                         status.failed(d.failure());
+                    } else if (d.isPreview()) {
+                        status.previewShown(d.computeNanos());
                     } else {
                         status.computed(d.computeNanos());
                     }
@@ -255,7 +257,7 @@ public final class WorkbenchWindow {
         Path target = chooser.getSelectedFile().toPath();
         String name = workspace.selected().file() != null ? workspace.selected().file().getFileName().toString() : r.design().name();
         exportInBackground("tuning sheet", target, () -> org.tankwright.report.TuningSheet.write(r, target,
-                org.tankwright.report.Paper.A4, org.tankwright.report.SheetInfo.today(name, org.tankwright.cli.VersionInfo.version())));
+                org.tankwright.report.Paper.A4, org.tankwright.report.SheetInfo.today(name, org.tankwright.report.Version.get())));
     }
 
     private void exportData() {

@@ -19,6 +19,7 @@ public final class OpenDesign {
     private String failure;
     private long computeNanos;
     private boolean computing;
+    private boolean preview;
 
     OpenDesign(String key, Design design, Path file) {
         this.key = key;
@@ -63,8 +64,17 @@ public final class OpenDesign {
         return computeNanos;
     }
 
+    /** True while a computation runs: also after the quick preview of an edit is shown, until its full result is. */
     public boolean isComputing() {
         return computing;
+    }
+
+    /**
+     * True when the latest result shown is the quick preview of an edit (its operating point: no
+     * sweeps, no envelope) and the full result is still being computed.
+     */
+    public boolean isPreview() {
+        return preview;
     }
 
     public boolean isDirty() {
@@ -80,10 +90,11 @@ public final class OpenDesign {
         computing = true;
     }
 
-    void shown(AnalysisResult r, String why, long nanos) {
-        computing = false;
+    void shown(AnalysisResult r, String why, long nanos, boolean isPreview) {
+        computing = isPreview && r != null;
         if (r != null) {
             result = r;
+            preview = isPreview;
         }
         failure = why;
         computeNanos = nanos;

@@ -70,7 +70,9 @@ public final class Workspace implements AutoCloseable {
             listeners.forEach(l -> l.computing(d));
         }, outcome -> {
             String why = outcome.succeeded() ? null : describe(outcome.failure());
-            d.shown(outcome.output(), why, outcome.nanos());
+            // the analysis's own time: a result taken from the head start was computed before it was asked for
+            d.shown(outcome.output(), why, outcome.output() != null ? outcome.output().computeNanos() : outcome.nanos(),
+                    outcome.preview());
             listeners.forEach(l -> l.resultShown(d));
         });
         engines.put(d, engine);
@@ -133,7 +135,7 @@ public final class Workspace implements AutoCloseable {
         LatestWins<Design, AnalysisResult> engine = engines.get(d);
         if (engine != null && d.isComputing()) {
             engine.cancel();
-            d.shown(null, "stopped by the user; showing the last result", 0);
+            d.shown(null, "stopped by the user; showing the last result", 0, false);
             listeners.forEach(l -> l.resultShown(d));
         }
     }

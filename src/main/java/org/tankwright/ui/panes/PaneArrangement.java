@@ -32,7 +32,7 @@ public final class PaneArrangement {
     /** Builds the default arrangement; the panes must be registered with the docking framework. */
     public static PaneArrangement createDefault() {
         ApplicationLayout layout = new WindowLayoutBuilder(EDITOR)
-                .dock(PLOTS, EDITOR, DockingRegion.SOUTH, 0.36)
+                .dock(PLOTS, EDITOR, DockingRegion.SOUTH, 0.42)
                 .dock(STRESS, PLOTS, DockingRegion.CENTER)
                 .dock(CHECKS, PLOTS, DockingRegion.CENTER)
                 .display(PLOTS)

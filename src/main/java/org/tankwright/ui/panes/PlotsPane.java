@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import javax.swing.JTabbedPane;
 import javax.swing.UIManager;
+import org.tankwright.analysis.AnalysisResult;
 import org.tankwright.charts.ChartStyle;
 import org.tankwright.charts.Figure;
 import org.tankwright.charts.ResultFigures;
@@ -21,6 +22,9 @@ public final class PlotsPane extends ResultPane {
     private final ToleranceTab tolerance;
     private final javax.swing.JComboBox<Object> compare = new javax.swing.JComboBox<>();
     private final Workspace workspace;
+    /** What each figure tab shows now; a tab is built only when it is the one shown (the others wait until picked). */
+    private final List<Object> builtFor = new ArrayList<>();
+    private Object wanted;
     private boolean refilling;
     private static final String NONE = "(no comparison)";
 
@@ -31,8 +35,10 @@ public final class PlotsPane extends ResultPane {
         for (String title : ResultFigures.TITLES.subList(0, TOLERANCE)) {
             FigureView v = new FigureView("plot " + title);
             views.add(v);
+            builtFor.add(null);
             tabs.addTab(title, v);
         }
+        tabs.addChangeListener(e -> buildShownTab());
         tolerance = new ToleranceTab(() -> workspace.selected() == null ? null : workspace.selected().result());
         tabs.addTab(ResultFigures.TITLES.get(TOLERANCE), tolerance);
         compare.setName("compareWith");
@@ -42,13 +48,13 @@ public final class PlotsPane extends ResultPane {
                 showFigures(workspace.selected());
             }
         });
-        javax.swing.JPanel bar = new javax.swing.JPanel(new java.awt.FlowLayout(java.awt.FlowLayout.LEFT, 6, 2));
+        javax.swing.JPanel bar = new javax.swing.JPanel(new java.awt.FlowLayout(java.awt.FlowLayout.RIGHT, 6, 0));
+        bar.setOpaque(false);
         bar.add(new javax.swing.JLabel("Compare with:"));
         bar.add(compare);
-        javax.swing.JPanel content = new javax.swing.JPanel(new java.awt.BorderLayout());
-        content.add(bar, java.awt.BorderLayout.NORTH);
-        content.add(tabs, java.awt.BorderLayout.CENTER);
-        add(content);
+        // beside the figure tabs, not above them: the height goes to the curves
+        tabs.putClientProperty(com.formdev.flatlaf.FlatClientProperties.TABBED_PANE_TRAILING_COMPONENT, bar);
+        add(tabs);
         this.workspace = workspace;
         UIManager.addPropertyChangeListener(e -> {
             if ("lookAndFeel".equals(e.getPropertyName())) {
@@ -71,6 +77,9 @@ public final class PlotsPane extends ResultPane {
 
     @Override
     protected void show(OpenDesign d) {
+        if (d != null && d.isPreview() && wanted instanceof Wanted w && w.design() == d && w.result() != null) {
+            return; // an edit's operating point has no sweeps: keep the last curves until its full result comes
+        }
         tolerance.resultChanged();
         showFigures(d);
     }
@@ -109,12 +118,23 @@ public final class PlotsPane extends ResultPane {
 
     private void showFigures(OpenDesign d) {
         OpenDesign other = d == null ? null : comparison(d);
-        List<Figure> figures = d == null || d.result() == null ? null : ResultFigures.all(d.result(),
-                other == null ? null : other.result(), ChartStyle.fromLookAndFeel());
-        for (int i = 0; i < views.size(); i++) {
-            String title = ResultFigures.TITLES.get(i);
-            views.get(i).show(figures != null ? figures.get(i)
-                    : Figure.missing(title, d == null ? "No design open." : "Computing…"));
+        AnalysisResult r = d == null ? null : d.result();
+        wanted = new Wanted(d, r, other == null ? null : other.result(), ChartStyle.fromLookAndFeel());
+        buildShownTab();
+    }
+
+    /** What the figure tabs are to show: a design's result, the one compared with it, the style. */
+    private record Wanted(OpenDesign design, AnalysisResult result, AnalysisResult other, ChartStyle style) {
+    }
+
+    /** Builds the shown figure tab when it does not show what is wanted yet. */
+    private void buildShownTab() {
+        int i = tabs.getSelectedIndex();
+        if (i < 0 || i >= views.size() || !(wanted instanceof Wanted w) || builtFor.get(i) == w) {
+            return;
         }
+        builtFor.set(i, w);
+        views.get(i).show(w.result() != null ? ResultFigures.one(i, w.result(), w.other(), w.style())
+                : Figure.missing(ResultFigures.TITLES.get(i), w.design() == null ? "No design open." : "Computing…"));
     }
 }

@@ -88,6 +88,7 @@ public final class FigureView extends JPanel {
         }
         figure = f;
         if (f.present()) {
+            fitToPane(f.chart());
             chartPanel.setChart(f.chart());
             crosshair.setPaint(ChartStyle.fromLookAndFeel().foreground());
             crosshair.setValue(Double.NaN);
@@ -99,6 +100,21 @@ public final class FigureView extends JPanel {
             missing.setText("<html><div style='text-align:center'>" + f.title() + "<br>" + f.notShown() + "</div></html>");
             cards.show(body, TEXT);
             readout.setText(" ");
+        }
+    }
+
+    /**
+     * The pane is wide and short: the tab already names the figure, so its title is not drawn,
+     * and the legend goes to the right, leaving the height to the curves.
+     */
+    private static void fitToPane(JFreeChart chart) {
+        if (chart.getTitle() != null) {
+            chart.getTitle().setVisible(false);
+        }
+        org.jfree.chart.title.LegendTitle legend = chart.getLegend();
+        if (legend != null) {
+            legend.setPosition(org.jfree.chart.ui.RectangleEdge.RIGHT);
+            legend.setVerticalAlignment(org.jfree.chart.ui.VerticalAlignment.CENTER);
         }
     }
 
