@@ -10,8 +10,9 @@ import javax.swing.SwingUtilities;
 
 /**
  * Runs a computation off the event thread, latest request wins: one worker thread; a request
- * that is superseded before it starts is skipped, and a result whose request was superseded
- * while it ran is dropped. Outcomes are published on the event thread.
+ * that is superseded before it starts is skipped; one superseded while it runs is interrupted (an
+ * analysis stops at its next stage) and its result, if it still comes, is dropped. Outcomes are
+ * published on the event thread.
  *
  * @param <I> the input (an immutable document)
  * @param <O> the output (an immutable result)
@@ -66,6 +67,10 @@ public final class LatestWins<I, O> implements AutoCloseable {
     /** Asks for {@code input} to be computed; supersedes every earlier request. Call on the event thread. */
     public void submit(I input) {
         long generation = latest.incrementAndGet();
+        Thread t = running;
+        if (t != null) {
+            t.interrupt(); // the request in flight is superseded: an analysis stops at its next stage
+        }
         onStart.run();
         worker.execute(() -> run(input, generation));
     }

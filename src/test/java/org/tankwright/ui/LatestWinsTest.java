@@ -114,4 +114,35 @@ class LatestWinsTest {
             Thread.currentThread().interrupt();
         }
     }
+
+    @Test
+    void aNewRequestInterruptsTheOneItSupersedes() throws Exception {
+        CountDownLatch started = new CountDownLatch(1);
+        CountDownLatch interrupted = new CountDownLatch(1);
+        CountDownLatch published = new CountDownLatch(1);
+        List<Integer> shown = new CopyOnWriteArrayList<>();
+        try (LatestWins<Integer, Integer> lw = new LatestWins<>(i -> {
+            if (i == 1) {
+                started.countDown();
+                try {
+                    Thread.sleep(10_000);
+                } catch (InterruptedException e) {
+                    interrupted.countDown();
+                    throw new java.util.concurrent.CancellationException("superseded");
+                }
+            }
+            return i;
+        }, () -> { }, o -> {
+            shown.add(o.output());
+            published.countDown();
+        })) {
+            SwingUtilities.invokeAndWait(() -> lw.submit(1));
+            assertTrue(started.await(5, TimeUnit.SECONDS));
+            SwingUtilities.invokeAndWait(() -> lw.submit(2));
+            assertTrue(interrupted.await(5, TimeUnit.SECONDS), "the superseded computation was interrupted");
+            assertTrue(published.await(5, TimeUnit.SECONDS));
+            SwingUtilities.invokeAndWait(() -> { }); // flush
+            assertEquals(List.of(2), shown, "only the latest request's result is shown, not the interrupted one's failure");
+        }
+    }
 }
