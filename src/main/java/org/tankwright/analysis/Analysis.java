@@ -97,7 +97,7 @@ public final class Analysis {
             // points are solved again with the bank's real capacitance, ESR and ESL.
             BankStage.Chosen c = addBank(d, tuned.operatingPoint(), EnvelopeStage.heater(heated, d), "C1", tuned.c1(), banks, notes);
             if (c != null) {
-                heated = HeaterStage.solve(d, primary, new HeaterStage.Bank(c.bank().capacitance(), c.bank().esr(), c.bank().esl()));
+                heated = HeaterStage.solve(d, primary, new HeaterStage.Bank(c.bank().capacitance(), c.bank().esr(), c.bank().esl()), heated);
                 heater = heated.report();
                 tuned = heated.cold();
                 notes.add("heater solved again with the chosen bank's real capacitance, ESR and ESL");

@@ -62,7 +62,8 @@ public final class PlateLoad {
     private final double[] k;
     private final double[] w;
     private final double[] s;
-    private final double[][] j1;
+    /** w_q·α_q·J1(α_q r_j)·S(α_q) for ring j at node q: the surface field's integrand without Γ. */
+    private final double[][] fieldWeights;
 
     private PlateLoad(double[] radii, double[] heights) {
         this.radii = radii.clone();
@@ -91,12 +92,18 @@ public final class PlateLoad {
             idx = panel(p * width, (p + 1) * width, idx);
         }
         s = new double[n];
-        j1 = new double[radii.length][n];
+        double[][] j1 = new double[radii.length][n];
         for (int i = 0; i < radii.length; i++) {
             for (int q = 0; q < n; q++) {
                 double v = BesselJ1.of(k[q] * radii[i]);
                 j1[i][q] = v;
                 s[q] += radii[i] * v * Math.exp(-k[q] * heights[i]);
+            }
+        }
+        fieldWeights = new double[radii.length][n];
+        for (int i = 0; i < radii.length; i++) {
+            for (int q = 0; q < n; q++) {
+                fieldWeights[i][q] = w[q] * k[q] * j1[i][q] * s[q];
             }
         }
     }
@@ -139,12 +146,13 @@ public final class PlateLoad {
      */
     public Complex impedanceChange(double omega, double conductivity, double muR, double thickness) {
         double[] g = reflection(omega, conductivity, muR, thickness);
+        int nodes = k.length;
         double re = 0;
         double im = 0;
         for (int q = 0; q < k.length; q++) {
             double f = w[q] * s[q] * s[q];
-            re += f * g[2 * q];
-            im += f * g[2 * q + 1];
+            re += f * g[q];
+            im += f * g[nodes + q];
         }
         // jωπµ0·(re + j·im)
         double c = omega * Math.PI * Constants.MU0;
@@ -169,22 +177,28 @@ public final class PlateLoad {
     }
 
     private double[] fields(double[] g) {
-        double[] out = new double[radii.length];
-        for (int j = 0; j < radii.length; j++) {
+        return fields(g, 0, radii.length - 1);
+    }
+
+    /** The surface field under rings lo..hi (index 0 is ring lo). */
+    private double[] fields(double[] g, int lo, int hi) {
+        int nodes = k.length;
+        double[] out = new double[hi - lo + 1];
+        for (int j = lo; j <= hi; j++) {
             double re = 0;
             double im = 0;
-            double[] jj = j1[j];
+            double[] ff = fieldWeights[j];
             for (int q = 0; q < k.length; q++) {
-                double f = w[q] * k[q] * jj[q] * s[q];
-                re += f * (1 - g[2 * q]);
-                im -= f * g[2 * q + 1];
+                double f = ff[q];
+                re += f * (1 - g[q]);
+                im -= f * g[nodes + q];
             }
-            out[j] = 0.5 * Math.hypot(re, im);
+            out[j - lo] = 0.5 * Math.hypot(re, im);
         }
         return out;
     }
 
-    /** Γ(α) at every node, interleaved (re, im). */
+    /** Γ(α) at every node: the real parts, then the imaginary parts. */
     private double[] reflection(double omega, double conductivity, double muR, double thickness) {
         if (!(omega > 0) || Double.isInfinite(omega)) {
             throw new IllegalArgumentException("angular frequency " + omega + " rad/s must be a finite number above zero");
@@ -196,35 +210,50 @@ public final class PlateLoad {
         if (!(thickness > 0)) {
             throw new IllegalArgumentException("plate thickness " + thickness + " m must be above zero");
         }
-        double[] g = new double[2 * k.length];
+        int nodes = k.length;
+        double[] g = new double[2 * nodes]; // real parts, then imaginary parts
         if (Double.isInfinite(conductivity)) {
             for (int q = 0; q < k.length; q++) {
-                g[2 * q] = -1;
+                g[q] = -1;
             }
             return g;
         }
         double kk = omega * Constants.MU0 * muR * conductivity; // imaginary part of α1²
         boolean halfSpace = Double.isInfinite(thickness);
-        for (int q = 0; q < k.length; q++) {
+        int n = k.length;
+        double[] rootRe = new double[n];
+        double[] rootIm = new double[n];
+        // First the half-space reflection at every node, in a loop without branches (the compiler can
+        // run it on several nodes at once); then the slab's second face where it still shows.
+        for (int q = 0; q < n; q++) {
             double a = k[q];
             // α1 = √(a² + j·kk), principal root (real part > 0)
             double x = a * a;
             double mod = Math.sqrt(x * x + kk * kk); // no overflow: x ≤ 1e12, kk ≤ 1e20 for any plate and frequency here
             double ar = Math.sqrt(0.5 * (mod + x));
-            double ai = kk == 0 ? 0 : kk / (2 * ar);
+            double ai = kk / (2 * ar); // 0 when kk = 0 (ar > 0 since a > 0)
             // r = (µ a − α1)/(µ a + α1)
             double nr = muR * a - ar;
             double dr = muR * a + ar;
             double dd = dr * dr + ai * ai;
-            double rr = (nr * dr - ai * ai) / dd;          // (nr − j ai)(dr − j ai)/|dr + j ai|²
-            double ri = (-ai * dr - nr * ai) / dd;
-            // e = exp(−2 α1 t); below 1e-17 the slab is a half-space to double precision
-            double mag = halfSpace ? 0 : Math.exp(-2 * ar * thickness);
-            if (mag < 1e-17) {
-                g[2 * q] = rr;
-                g[2 * q + 1] = ri;
+            g[q] = (nr * dr - ai * ai) / dd;          // (nr − j ai)(dr − j ai)/|dr + j ai|²
+            g[nodes + q] = (-ai * dr - nr * ai) / dd;
+            rootRe[q] = ar;
+            rootIm[q] = ai;
+        }
+        if (halfSpace) {
+            return g;
+        }
+        for (int q = 0; q < n; q++) {
+            double ar = rootRe[q];
+            // e = exp(−2 α1 t); below e^-40 < 1e-17 the slab is a half-space to double precision
+            if (2 * ar * thickness > 40) {
                 continue;
             }
+            double ai = rootIm[q];
+            double rr = g[q];
+            double ri = g[nodes + q];
+            double mag = Math.exp(-2 * ar * thickness);
             double er = mag * Math.cos(-2 * ai * thickness);
             double ei = mag * Math.sin(-2 * ai * thickness);
             // numerator r(1 − e), denominator 1 − r² e
@@ -236,8 +265,8 @@ public final class PlateLoad {
             double denR = 1 - (r2r * er - r2i * ei);
             double denI = -(r2r * ei + r2i * er);
             double den = denR * denR + denI * denI;
-            g[2 * q] = (numR * denR + numI * denI) / den;
-            g[2 * q + 1] = (numI * denR - numR * denI) / den;
+            g[q] = (numR * denR + numI * denI) / den;
+            g[nodes + q] = (numI * denR - numR * denI) / den;
         }
         return g;
     }
@@ -249,6 +278,17 @@ public final class PlateLoad {
      */
     public LoadedPlateCoil load(FlatWorkCoil coil, PlateGeometry plate, WorkpieceMedium medium, double frequency,
                                 double coilCurrent) {
+        return load(coil, plate, medium, frequency, coilCurrent, Double.NaN);
+    }
+
+    /**
+     * As {@link #load(FlatWorkCoil, PlateGeometry, WorkpieceMedium, double, double)}, with the µr of a
+     * nearby solution ({@code muHint}, NaN for none) to start the iteration from: the root is bracketed
+     * around it first (widened until the sign changes), which saves evaluations when an outer
+     * iteration calls again with a slightly different current or frequency. The result is the same root.
+     */
+    public LoadedPlateCoil load(FlatWorkCoil coil, PlateGeometry plate, WorkpieceMedium medium, double frequency,
+                                double coilCurrent, double muHint) {
         HeatingInputs.positive("frequency", frequency, "Hz");
         HeatingInputs.nonNegative("coil current", coilCurrent, "A");
         double omega = 2 * Math.PI * frequency;
@@ -256,29 +296,114 @@ public final class PlateLoad {
         double sigma = 1 / rho;
         double t = plate.thickness();
         double mu;
-        int evaluations = 0;
+        int[] count = new int[1];
+        double[] g;
+        double peak;
         if (medium.fieldDependent()) {
-            int[] count = new int[1];
-            UnivariateFunction h = lnMu -> {
-                count[0]++;
-                double field = coilCurrent * peakSurfaceField(omega, sigma, Math.exp(lnMu), t);
-                return lnMu - Math.log(medium.relativePermeability(SQRT2 * field));
-            };
-            mu = Math.exp(new BrentSolver(1e-12, 1e-10).solve(200, h, 0.0, Math.log(MU_MAX)));
-            evaluations = count[0];
+            // The iteration needs only the largest field: look at the few rings around where it lies
+            // (from a first full look), then check at the root that it has not moved out of them.
+            int n = radii.length;
+            double start = muHint >= 1 && muHint <= MU_MAX ? muHint : 1.0;
+            double[] g0 = reflection(omega, sigma, start, t);
+            int j = argMax(fields(g0, 0, n - 1));
+            int lo = Math.max(0, j - 2);
+            int hi = Math.min(n - 1, j + 2);
+            Reflections known = new Reflections(Math.log(start), g0);
+            mu = solveMu(medium, omega, sigma, t, coilCurrent, muHint, lo, hi, count, known);
+            g = reflection(omega, sigma, mu, t);
+            double[] all = fields(g, 0, n - 1);
+            int jf = argMax(all);
+            if (jf < lo || jf > hi) {
+                mu = solveMu(medium, omega, sigma, t, coilCurrent, muHint, 0, n - 1, count, known);
+                g = reflection(omega, sigma, mu, t);
+                all = fields(g, 0, n - 1);
+                jf = argMax(all);
+            }
+            peak = all[jf];
         } else {
             mu = medium.relativePermeability(SQRT2 * coilCurrent * peakSurfaceField(omega, sigma, 1.0, t));
+            g = reflection(omega, sigma, mu, t);
+            peak = 0;
+            for (double v : fields(g)) {
+                peak = Math.max(peak, v);
+            }
         }
-        double[] g = reflection(omega, sigma, mu, t);
-        double peak = 0;
-        for (double v : fields(g)) {
-            peak = Math.max(peak, v);
-        }
+        int evaluations = count[0];
         Complex dz = impedanceChange(omega, sigma, mu, t);
         double delta = ReferenceDepth.of(rho, frequency, mu);
         return new LoadedPlateCoil(frequency, coilCurrent, coil.emptyInductance(),
                 coil.emptyInductance() + dz.getImaginary() / omega, dz.getReal(), coil.resistance(), peak * coilCurrent,
                 mu, rho, delta, t, evaluations, provenance(coil, plate, medium, delta));
+    }
+
+    /**
+     * µr made consistent with the largest surface field under rings lo..hi: the root of
+     * h(ln µ) = ln µ − ln µr(√2·I·H(µ)), from the hint by the secant method when one is given, else (or
+     * when that fails) by Brent's method over the whole range, where h(0) ≤ 0 < h(ln MU_MAX).
+     */
+    private double solveMu(WorkpieceMedium medium, double omega, double sigma, double t, double coilCurrent,
+                           double muHint, int lo, int hi, int[] count, Reflections known) {
+        UnivariateFunction h = lnMu -> {
+            count[0]++;
+            double[] g = lnMu == known.lnMu() ? known.gamma() : reflection(omega, sigma, Math.exp(lnMu), t);
+            double[] f = fields(g, lo, hi);
+            double field = coilCurrent * f[argMax(f)];
+            return lnMu - Math.log(medium.relativePermeability(SQRT2 * field));
+        };
+        double lnMu = Double.NaN;
+        if (muHint >= 1 && muHint <= MU_MAX) {
+            lnMu = secantFrom(h, Math.log(muHint), Math.log(MU_MAX));
+        }
+        if (Double.isNaN(lnMu)) {
+            lnMu = new BrentSolver(1e-12, 1e-10).solve(200, h, 0.0, Math.log(MU_MAX));
+        }
+        return Math.exp(lnMu);
+    }
+
+    /** Γ already computed at one ln µ (the start of the iteration), so that it is not computed twice. */
+    private record Reflections(double lnMu, double[] gamma) {
+    }
+
+    private static int argMax(double[] v) {
+        int j = 0;
+        for (int i = 1; i < v.length; i++) {
+            if (v[i] > v[j]) {
+                j = i;
+            }
+        }
+        return j;
+    }
+
+    /**
+     * The root of {@code h} by the secant method from {@code x0} (and x0 + 0.002), to 1e-10 in ln µ as
+     * Brent's method is asked for; NaN when it leaves [0, max] or has not converged in a few steps
+     * (the caller then brackets the whole range).
+     */
+    private static double secantFrom(UnivariateFunction h, double x0, double max) {
+        double xa = x0;
+        double fa = h.value(xa);
+        double xb = Math.min(max, x0 + 0.002);
+        if (xb == xa) {
+            xb = x0 - 0.002;
+        }
+        double fb = h.value(xb);
+        for (int i = 0; i < 8; i++) {
+            if (fb == fa) {
+                return Double.NaN;
+            }
+            double xc = xb - fb * (xb - xa) / (fb - fa);
+            if (!(xc >= 0 && xc <= max)) {
+                return Double.NaN;
+            }
+            if (Math.abs(xc - xb) <= 1e-10) {
+                return xc;
+            }
+            xa = xb;
+            fa = fb;
+            xb = xc;
+            fb = h.value(xb);
+        }
+        return Double.NaN;
     }
 
     /** One-shot convenience: builds the table and loads the coil. */
