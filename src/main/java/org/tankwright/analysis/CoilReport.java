@@ -17,6 +17,8 @@ import java.util.List;
  * @param resistanceDc      DC resistance at the winding temperature, Ω (NaN when measured)
  * @param resistanceAc      series AC resistance at the operating frequency, Ω
  * @param resistanceModel   how the AC resistance was obtained
+ * @param resistanceModels  every AC-resistance model that applies, side by side, the chosen one first
+ *                          (empty when the coil is measured)
  * @param q                 ωL/R_ac
  * @param selfCapacitance   estimated self-capacitance, F (NaN when unknown)
  * @param selfResonance     estimated self-resonant frequency, Hz (NaN when unknown)
@@ -31,7 +33,7 @@ import java.util.List;
  */
 public record CoilReport(String role, String label, String shape, double turns, double inductance,
                          String inductanceSource, List<ModelValue> models, double spread, double resistanceDc,
-                         double resistanceAc, String resistanceModel, double q, double selfCapacitance,
+                         double resistanceAc, String resistanceModel, List<ResistanceValue> resistanceModels, double q, double selfCapacitance,
                          double selfResonance, double apparentInductance, double wireLength, double conductorMass,
                          double conductorArea, double skinDepth, double strandDiameter, double turnPitch,
                          List<String> notes) {

@@ -10,6 +10,7 @@ import org.tankwright.magnetics.CoilModel;
 import org.tankwright.magnetics.CoilResult;
 import org.tankwright.magnetics.FlatSpiral;
 import org.tankwright.magnetics.InductanceEstimate;
+import org.tankwright.magnetics.ResistanceEstimate;
 import org.tankwright.magnetics.MultilayerSolenoid;
 import org.tankwright.magnetics.OperatingPoint;
 import org.tankwright.magnetics.PolygonSpiral;
@@ -124,8 +125,12 @@ final class CoilStage {
         double pitch = pitchOf(g);
         double srf = r.selfResonance();
         double apparent = Double.isFinite(srf) && srf > f ? l / (1 - (f / srf) * (f / srf)) : Double.NaN;
+        List<ResistanceValue> rModels = new ArrayList<>();
+        for (ResistanceEstimate e : r.resistanceModels()) {
+            rModels.add(new ResistanceValue(e.name(), e.resistanceAc(), e.source(), e.valid(), e.note()));
+        }
         return new CoilReport(role, label(role, c), Token.of(c.shape()), g.turns(), l, lSource, models,
-                r.modelSpread(), r.resistanceDc(), rac, rModel, 2 * Math.PI * f * l / rac, r.selfCapacitance(), srf,
+                r.modelSpread(), r.resistanceDc(), rac, rModel, List.copyOf(rModels), 2 * Math.PI * f * l / rac, r.selfCapacitance(), srf,
                 apparent, r.wireLength(), r.conductorMass(), w.metalArea(), r.skinDepth(), strand, pitch,
                 List.copyOf(notes));
     }
@@ -151,7 +156,7 @@ final class CoilStage {
         double r = c.resistance();
         return new CoilReport(role, label(role, c), Token.of(CoilShape.MEASURED), Double.NaN, l,
                 "measured (entered)", List.of(new ModelValue("measured", l, "entered by the user", true,
-                "a measured coil: no geometry model")), 0.0, Double.NaN, r, "measured (entered)",
+                "a measured coil: no geometry model")), 0.0, Double.NaN, r, "measured (entered)", List.of(),
                 2 * Math.PI * f * l / r, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN,
                 Double.NaN, Double.NaN, Double.NaN,
                 List.of("a measured coil: its self-resonance, conductor and field are unknown to the tool"));

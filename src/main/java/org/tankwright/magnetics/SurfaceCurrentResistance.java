@@ -213,12 +213,12 @@ public final class SurfaceCurrentResistance {
         double aOverDelta = a / delta;
         String note = String.format(Locale.ROOT, "valid for wire radius ≥ %.0f skin depths (here %.3g), gap between "
                 + "turns ≥ %.0f skin depths (here %s)%s; thin-skin ratio to isolated turns %.3g, %d arcs per turn; "
-                + "high-frequency inductance %.4g H",
+                + "high-frequency inductance %s",
                 MIN_RADIUS_OVER_DELTA, aOverDelta, MIN_GAP_OVER_DELTA,
                 Double.isInfinite(s.gap()) ? "one turn" : String.format(Locale.ROOT, "%.3g", s.gap() / delta),
                 c instanceof Conductor.Tube t ? String.format(Locale.ROOT, ", tube wall ≥ %.0f skin depths (here %.3g)",
                         MIN_WALL_OVER_DELTA, t.wall() / delta) : "",
-                s.ratio(), s.arcs(), s.inductance());
+                s.ratio(), s.arcs(), org.tankwright.units.Quantities.format(s.inductance(), org.tankwright.units.Dimension.INDUCTANCE, 4));
         return new ResistanceEstimate(NAME, resistance(s, a, resistivity, delta), SOURCE, valid(c, s, delta), note);
     }
 

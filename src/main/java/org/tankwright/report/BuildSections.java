@@ -6,6 +6,7 @@ import org.tankwright.analysis.CoilReport;
 import org.tankwright.analysis.ElementStress;
 import org.tankwright.analysis.HeaterReport;
 import org.tankwright.analysis.ModelValue;
+import org.tankwright.analysis.ResistanceValue;
 import org.tankwright.analysis.NetworkReport;
 import org.tankwright.design.Backing;
 import org.tankwright.design.Coil;
@@ -189,14 +190,33 @@ final class BuildSections {
         winding.add("Measure L and R at the operating frequency before assembly and compare with the expected column.");
         flow.list(winding, false);
         if (c.models().size() > 1) {
-            Table m = new Table(new String[] {"Inductance model", "Value", "Valid here", "Source and note"},
-                    new float[] {1.6f, 1.1f, 0.8f, 4.5f}, false, true, false, false);
+            List<String[]> rows = new ArrayList<>();
             for (ModelValue mv : c.models()) {
-                m.row(mv.name(), Fmt.build(mv.value(), Dimension.INDUCTANCE), mv.valid() ? "yes" : "no",
-                        mv.source() + (mv.note() == null || mv.note().isBlank() ? "" : "; " + mv.note()));
+                rows.add(modelRow(mv.name(), Fmt.build(mv.value(), Dimension.INDUCTANCE), mv.valid(), mv.source(), mv.note()));
             }
-            flow.table(m);
+            flow.table(modelTable("Inductance model", rows));
         }
+        if (c.resistanceModels().size() > 1) {
+            List<String[]> rows = new ArrayList<>();
+            for (ResistanceValue rv : c.resistanceModels()) {
+                rows.add(modelRow(rv.name(), Fmt.build(rv.resistanceAc(), Dimension.RESISTANCE), rv.valid(), rv.source(), rv.note()));
+            }
+            flow.table(modelTable("AC resistance model", rows));
+        }
+    }
+
+    private static String[] modelRow(String name, String value, boolean valid, String source, String note) {
+        return new String[] {name, value, valid ? "yes" : "no", source + (note == null || note.isBlank() ? "" : "; " + note)};
+    }
+
+    /** Models of one quantity side by side: name, value, verdict, source and note. */
+    private static Table modelTable(String what, List<String[]> rows) {
+        Table m = new Table(new String[] {what, "Value", "Valid here", "Source and note"},
+                new float[] {1.6f, 1.1f, 0.8f, 4.5f}, false, true, false, false);
+        for (String[] r : rows) {
+            m.row(r);
+        }
+        return m;
     }
 
     private static void geometry(Coil c, List<String[]> rows) {

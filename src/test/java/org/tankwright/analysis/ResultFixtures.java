@@ -369,7 +369,7 @@ public final class ResultFixtures {
                         null, null, null),
                 null, null, null, null, null, null);
         CoilReport cr = new CoilReport("primary", "bench coil", "measured", Double.NaN, p.inductance, "measured",
-                List.of(), Double.NaN, Double.NaN, p.resistance, "measured", w * p.inductance / p.resistance,
+                List.of(), Double.NaN, Double.NaN, p.resistance, "measured", List.of(), w * p.inductance / p.resistance,
                 Double.NaN, Double.NaN, p.inductance, Double.NaN, Double.NaN, Double.NaN, copperSkinDepth(p.frequency),
                 Double.NaN, Double.NaN, List.of());
         NetworkReport network = new NetworkReport(p.topology.token(), p.frequency, c, Double.NaN, c, Double.NaN, 0,
@@ -465,7 +465,7 @@ public final class ResultFixtures {
         double f = w / (2 * Math.PI);
         return new CoilReport(role, coil.label(), coil.shape().name().toLowerCase(java.util.Locale.ROOT), turns, l,
                 "fixture", List.of(new ModelValue("fixture", l, "invented", true, "")), 0, r / 3, r, "fixture",
-                w * l / r, cSelf, srf, l / (1 - sq(f / srf)), Double.NaN, Double.NaN, area, delta, strand, pitch,
+                List.of(new ResistanceValue("fixture", r, "invented", true, "")), w * l / r, cSelf, srf, l / (1 - sq(f / srf)), Double.NaN, Double.NaN, area, delta, strand, pitch,
                 List.of());
     }
 

@@ -34,7 +34,7 @@ class ResultViewsTest {
     private static AnalysisResult result() {
         Design d = Presets.demo();
         CoilReport l1 = new CoilReport("primary", "pad coil", "spiral", 12, 10e-6, "filament", List.of(), 0.02, 0.05, 0.08,
-                "litz", 100, 5e-12, 20e6, 10.1e-6, 1.2, 0.01, 1e-6, 2e-4, 1e-4, 1.2e-3, List.of());
+                "litz", List.of(), 100, 5e-12, 20e6, 10.1e-6, 1.2, 0.01, 1e-6, 2e-4, 1e-4, 1.2e-3, List.of());
         CouplingReport k = new CouplingReport(2e-6, 0.25, 10e-6, 8e-6, "filament", 0.1, 0.3, "10 mm", "3 mm", Double.NaN,
                 List.of(new Series("k-vs-distance", "k vs distance", "distance", Dimension.LENGTH, "k", Dimension.DIMENSIONLESS,
                         new double[] {0.003, 0.005, 0.01}, new double[] {0.3, 0.25, 0.1}, 0.005)), List.of());
