@@ -28,7 +28,7 @@ final class MedhurstResistance {
     /** Columns: wire diameter/pitch (Medhurst's d/s), descending from close-wound; pitch/diameter 1 … 10. */
     static final double[] DIAMETER_OVER_PITCH = {1.0, 0.9, 0.8, 0.7, 0.6, 0.5, 0.4, 0.3, 0.2, 0.1};
     /**
-     * ψ(ℓ/D, d/p), Medhurst 1947, as transcribed (public transcriptions agree on every entry but one: ℓ/D = 10,
+     * ψ(ℓ/D, d/p), Medhurst 1947, as reproduced in public copies of his table (the copies agree on every entry but one: ℓ/D = 10,
      * d/p = 0.7 reads 2.27 in most and 2.37 in one; 2.37 is used here as it continues the column smoothly
      * between 2.34 at ℓ/D = 8 and the long-coil values; the test leaves that point out).
      */

@@ -9,7 +9,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
-/** E-series values against the tables of IEC 60063 (transcribed here independently of the production code). */
+/** E-series values against the tables of IEC 60063 (typed in here independently of the production code). */
 class ESeriesTest {
     // IEC 60063, table of E6, E12, E24
     static final double[] E6 = {1.0, 1.5, 2.2, 3.3, 4.7, 6.8};

@@ -40,7 +40,7 @@ class MedhurstCrossCheckTest {
      * 5.4 %, −13.5 %. The bounds below sit just above these. The big miss is real and stated: the field at a
      * wire's centre stands for the field across it, which fails when neighbours are within about a wire
      * diameter (the neighbours' field varies across the wire and their eddy currents screen it); in short
-     * close-wound coils ours is low by up to half. The point ℓ/D = 10, d/p = 0.7 is left out (transcriptions
+     * close-wound coils ours is low by up to half. The point ℓ/D = 10, d/p = 0.7 is left out (copies of the table
      * disagree).
      */
     @Test
