@@ -53,8 +53,11 @@ final class Readings {
         rows.add(new Row("compensation", c.topology().token(), ""));
         rows.add(new Row("design frequency", q(d.frequency(), Dimension.FREQUENCY, 4), "given"));
         if (n != null) {
-            for (double f : n.zeroPhaseFrequencies()) {
-                rows.add(new Row("zero-phase frequency", q(f, Dimension.FREQUENCY, 4), n.bifurcated() ? "bifurcated" : ""));
+            double[] zs = n.zeroPhaseFrequencies();
+            for (int i = 0; i < zs.length; i++) {
+                // several zero-phase frequencies (a bifurcated link) are numbered from the lowest
+                String name = zs.length == 1 ? "zero-phase frequency" : "zero-phase frequency " + (i + 1) + " of " + zs.length;
+                rows.add(new Row(name, q(zs[i], Dimension.FREQUENCY, 4), n.bifurcated() ? "bifurcated" : ""));
             }
         }
         for (CoilReport coil : r.coils() == null ? List.<CoilReport>of() : r.coils()) {

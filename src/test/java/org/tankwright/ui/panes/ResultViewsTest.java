@@ -71,6 +71,17 @@ class ResultViewsTest {
     }
 
     @Test
+    void severalZeroPhaseFrequenciesAreNumbered() throws Exception {
+        // the robot pad is bifurcated: three zero-phase frequencies near 85 kHz
+        List<Readings.Row> rows = Readings.of(org.tankwright.analysis.Analysis.run(
+                org.tankwright.analysis.Presets.load("warehouse-robot-pad"), org.tankwright.analysis.Analysis.Scope.OPERATING_POINT));
+        List<String> names = rows.stream().map(Readings.Row::quantity).filter(q -> q.startsWith("zero-phase")).toList();
+        assertTrue(names.size() > 1, names.toString());
+        assertEquals("zero-phase frequency 1 of " + names.size(), names.get(0));
+        assertEquals(names.size(), names.stream().distinct().count(), "each row has its own name: " + names);
+    }
+
+    @Test
     void stressRowsTakeTheWorstCaseAndRateTheMargin() {
         List<StressPane.Row> rows = StressPane.rowsOf(result());
         assertEquals(2, rows.size());
