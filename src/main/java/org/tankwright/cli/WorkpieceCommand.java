@@ -35,8 +35,9 @@ import java.util.concurrent.Callable;
  */
 @Command(name = "workpiece", mixinStandardHelpOptions = true, versionProvider = VersionInfo.class,
         sortOptions = false,
-        description = {"Power a round bar takes from an axial field at one frequency: reference depth, power per metre "
-                + "and in the bar, and its ratio to the thin-skin limit.",
+        description = {"Induction-heating power of a workpiece at one frequency: a round bar in an axial field (reference "
+                + "depth, power per metre and in the bar, and its ratio to the thin-skin limit), or a plate below a flat "
+                + "spiral (plate mode).",
                 "Give the field at the bar's surface (--field), or a coil (--coil-turns, --coil-length, --current; "
                         + "add --coil-diameter for the finite-coil model with the loaded inductance).",
                 "Plate mode (--plate-thickness): a round plate of --diameter below a flat spiral (--coil-turns, --coil-diameter,"
