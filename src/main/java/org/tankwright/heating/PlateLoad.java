@@ -145,7 +145,11 @@ public final class PlateLoad {
      * +∞ for a half-space).
      */
     public Complex impedanceChange(double omega, double conductivity, double muR, double thickness) {
-        double[] g = reflection(omega, conductivity, muR, thickness);
+        return impedanceChange(omega, reflection(omega, conductivity, muR, thickness));
+    }
+
+    /** ΔZ per unit current, Ω, from Γ(α) already computed at every node. */
+    private Complex impedanceChange(double omega, double[] g) {
         int nodes = k.length;
         double re = 0;
         double im = 0;
@@ -329,7 +333,7 @@ public final class PlateLoad {
             }
         }
         int evaluations = count[0];
-        Complex dz = impedanceChange(omega, sigma, mu, t);
+        Complex dz = impedanceChange(omega, g); // Γ at the final µr, computed above
         double delta = ReferenceDepth.of(rho, frequency, mu);
         return new LoadedPlateCoil(frequency, coilCurrent, coil.emptyInductance(),
                 coil.emptyInductance() + dz.getImaginary() / omega, dz.getReal(), coil.resistance(), peak * coilCurrent,
